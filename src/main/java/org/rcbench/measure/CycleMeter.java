@@ -16,10 +16,12 @@ import org.rcbench.edge.EdgeSink;
  * are then replayed through the steps below. After that a running median of the last 63 cycles,
  * renewed every 32 cycles ({@link RecentMedians}), keeps the estimate current while, say, a
  * potentiometer is turned.</li>
- * <li><b>Glitches.</b> Each edge waits until the next one arrives. If the pulse between them is
- * shorter than {@code glitchFraction} of the typical pulse of that level, it is a runt: both edges
- * are dropped, which merges the pulses on either side (a spike in a low phase leaves one longer low
- * phase; a dropout in a high phase leaves one high phase).</li>
+ * <li><b>Glitches.</b> A pulse shorter than {@code glitchFraction} of the typical pulse of its
+ * level is a runt: both its edges are dropped, which merges the pulses on either side (a spike in
+ * a low phase leaves one low phase; a dropout in a high phase leaves one high phase). A pulse is
+ * judged once the pulse after it is known (two edges wait); when both are runts the relatively
+ * shorter goes, so a dropout soon after a rising edge removes the dropout, not the pulse's short
+ * first part.</li>
  * <li><b>Breaks.</b> A gap (level {@link #UNKNOWN}), a stall (no edge for {@code stallPeriods}
  * typical periods) or a repeated level (a lost edge) ends the current run: no cycle spans it, and
  * the phase-based figures (frequency fit, Allan deviation, TIE) start a new segment.</li>
@@ -48,8 +50,10 @@ public final class CycleMeter implements EdgeSink {
     private int aheadSize;
     private boolean learning = true;
 
-    private long pendingTick;
-    private int pendingLevel = NONE;
+    private long pendingTickA;
+    private int pendingLevelA = NONE;
+    private long pendingTickB;
+    private int pendingLevelB = NONE;
     private long lastTick = -1;
     private int lastLevel = NONE;
     private long rise = -1;
@@ -114,10 +118,7 @@ public final class CycleMeter implements EdgeSink {
         if (learning) {
             finishLearning();
         }
-        if (pendingLevel != NONE) {
-            commit(pendingTick, pendingLevel);
-            pendingLevel = NONE;
-        }
+        flushPending();
         long end = Math.max(lastTickOfSource, latestTick);
         if (lastTick >= 0 && !inGap && isStall(end - lastTick)) {
             stalls++;
@@ -160,10 +161,7 @@ public final class CycleMeter implements EdgeSink {
 
     private void process(long tick, int level) {
         if (level == UNKNOWN) {
-            if (pendingLevel != NONE) {
-                commit(pendingTick, pendingLevel);
-                pendingLevel = NONE;
-            }
+            flushPending();
             if (!inGap) {
                 gaps++;
             }
@@ -174,17 +172,64 @@ public final class CycleMeter implements EdgeSink {
             return;
         }
         inGap = false;
-        if (pendingLevel != NONE) {
-            long typicalPulse = pendingLevel == HIGH ? typical.high() : typical.low();
-            if (level != pendingLevel && tick - pendingTick < config.glitchFraction() * typicalPulse) {
+        if (pendingLevelB != NONE) {
+            // Two edges wait. The older pulse (A to B) is judged now that the pulse after it is
+            // known: when both are runts the relatively shorter one goes, so a dropout just after
+            // a rising edge removes the dropout, not the short first part of the high pulse.
+            boolean newerRunt = isRunt(pendingTickB, pendingLevelB, tick, level);
+            boolean olderRunt = isRunt(pendingTickA, pendingLevelA, pendingTickB, pendingLevelB);
+            if (olderRunt && newerRunt
+                    && relative(pendingTickB, pendingLevelB, tick) < relative(pendingTickA, pendingLevelA, pendingTickB)) {
                 glitches++;
-                pendingLevel = NONE;
+                pendingLevelB = NONE;
                 return;
             }
-            commit(pendingTick, pendingLevel);
+            if (olderRunt) {
+                glitches++;
+                pendingTickA = tick;
+                pendingLevelA = level;
+                pendingLevelB = NONE;
+                return;
+            }
+            commit(pendingTickA, pendingLevelA);
+            pendingTickA = pendingTickB;
+            pendingLevelA = pendingLevelB;
+            pendingTickB = tick;
+            pendingLevelB = level;
+        } else if (pendingLevelA != NONE) {
+            pendingTickB = tick;
+            pendingLevelB = level;
+        } else {
+            pendingTickA = tick;
+            pendingLevelA = level;
         }
-        pendingTick = tick;
-        pendingLevel = level;
+    }
+
+    /** True when the pulse from edge 1 to edge 2 is a runt of edge 1's level. */
+    private boolean isRunt(long tick1, int level1, long tick2, int level2) {
+        long typicalPulse = level1 == HIGH ? typical.high() : typical.low();
+        return level1 != level2 && tick2 - tick1 < config.glitchFraction() * typicalPulse;
+    }
+
+    /** Pulse length from edge 1 to {@code tick2} relative to the typical pulse of edge 1's level. */
+    private double relative(long tick1, int level1, long tick2) {
+        long typicalPulse = level1 == HIGH ? typical.high() : typical.low();
+        return (tick2 - tick1) / (double) Math.max(1, typicalPulse);
+    }
+
+    private void flushPending() {
+        if (pendingLevelB != NONE && isRunt(pendingTickA, pendingLevelA, pendingTickB, pendingLevelB)) {
+            glitches++;
+        } else {
+            if (pendingLevelA != NONE) {
+                commit(pendingTickA, pendingLevelA);
+            }
+            if (pendingLevelB != NONE) {
+                commit(pendingTickB, pendingLevelB);
+            }
+        }
+        pendingLevelA = NONE;
+        pendingLevelB = NONE;
     }
 
     private void commit(long tick, int level) {
