@@ -123,8 +123,8 @@ final class CycleStatistics {
         Measurement.TimeStats high = timeStats(highs, Double.NaN);
         Measurement.TimeStats low = timeStats(lows, Double.NaN);
         double duty = highs.mean() / periods.mean();
-        double uh = meanUncertaintyTicks(highs);
-        double ul = meanUncertaintyTicks(lows);
+        double uh = IntervalStats.meanUncertaintyTicks(highs);
+        double ul = IntervalStats.meanUncertaintyTicks(lows);
         double p = periods.mean();
         double dutyU = Math.sqrt(Math.pow(lows.mean() / (p * p) * uh, 2) + Math.pow(highs.mean() / (p * p) * ul, 2));
 
@@ -143,31 +143,7 @@ final class CycleStatistics {
     }
 
     private Measurement.TimeStats timeStats(ExactMoments m, double uncertaintyOverride) {
-        double tps = timebase.ticksPerSecond();
-        if (m.count() == 0) {
-            return new Measurement.TimeStats(0, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN);
-        }
-        double mean = m.mean();
-        double u = uncertaintyOverride;
-        if (Double.isNaN(u)) {
-            double stat = meanUncertaintyTicks(m);
-            double clock = mean * timebase.tolerancePpm() * 1e-6;
-            u = Math.sqrt(stat * stat + clock * clock) / tps;
-        }
-        double sd = m.count() >= 2 ? Math.sqrt(m.variance()) / tps : Double.NaN;
-        return new Measurement.TimeStats(m.count(), mean / tps, sd, m.min() / tps, m.max() / tps, u);
-    }
-
-    /**
-     * Standard uncertainty of a mean interval in ticks, without the probe clock: spread over root n
-     * when the readings spread over a tick or more, else the single-reading floor tick/sqrt(6)
-     * (identical readings share one quantization error, so nothing averages).
-     */
-    private static double meanUncertaintyTicks(ExactMoments m) {
-        double var = m.count() >= 2 ? m.variance() : 0;
-        boolean decorrelated = var >= 1;
-        double stat = var / m.count();
-        return Math.sqrt(decorrelated ? stat : stat + 1.0 / 6);
+        return IntervalStats.of(m, timebase, uncertaintyOverride);
     }
 
     private Measurement.Jitter jitter(double tps) {
