@@ -14,7 +14,7 @@ import org.rcbench.edge.EdgeSink;
  * and low time are the first estimate of the typical pulse lengths; a median is unmoved by a
  * minority of odd cycles such as the long first cycle after power-up or a glitch. The held edges
  * are then replayed through the steps below. After that a running median of the last 63 cycles,
- * renewed every 32 cycles ({@link RecentMedians}), keeps the estimate current while, say, a
+ * renewed every 128 cycles ({@link RecentMedians}), keeps the estimate current while, say, a
  * potentiometer is turned.</li>
  * <li><b>Glitches.</b> A pulse shorter than {@code glitchFraction} of the typical pulse of its
  * level is a runt: both its edges are dropped, which merges the pulses on either side (a spike in

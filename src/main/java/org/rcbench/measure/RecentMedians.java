@@ -9,7 +9,7 @@ package org.rcbench.measure;
  */
 final class RecentMedians {
     static final int SIZE = 63;
-    static final int EVERY = 32;
+    static final int EVERY = 128;
 
     private final long[] highs = new long[SIZE];
     private final long[] lows = new long[SIZE];
@@ -33,7 +33,7 @@ final class RecentMedians {
         if (filled < SIZE) {
             filled++;
         }
-        if (++sinceUpdate >= EVERY && filled >= EVERY) {
+        if (++sinceUpdate >= EVERY && filled >= SIZE / 2) {
             sinceUpdate = 0;
             high = median(highs, filled, scratch);
             low = median(lows, filled, scratch);

@@ -32,29 +32,50 @@ final class StreamingAllan {
 
     /** The phase of sample {@code index} (0, 1, 2 ... within the segment), in ticks from the segment start. */
     void add(long index, long phaseTicks) {
+        addLevelZero(phaseTicks);
         int top = index == 0 ? LEVELS - 1 : Math.min(LEVELS - 1, Long.numberOfTrailingZeros(index));
-        for (int level = 0; level <= top; level++) {
+        for (int level = 1; level <= top; level++) {
             long c = counts[level];
             int base = level * RING;
             ring[base + (int) (c & MASK)] = phaseTicks;
             counts[level] = c + 1;
-            if (level == 0) {
-                term(0, base, c, 1, phaseTicks);
-                term(1, base, c, 2, phaseTicks);
-                term(2, base, c, 4, phaseTicks);
-                term(3, base, c, 8, phaseTicks);
-            } else {
-                term(level + 3, base, c, 8, phaseTicks);
+            if (c >= 16) {
+                long d = phaseTicks - 2 * ring[base + (int) ((c - 8) & MASK)] + ring[base + (int) ((c - 16) & MASK)];
+                double dd = d;
+                sumSquares[level + 3] += dd * dd;
+                terms[level + 3]++;
             }
         }
     }
 
-    private void term(int octave, int base, long c, int lag, long x) {
-        if (c >= 2L * lag) {
-            long d = x - 2 * ring[base + (int) ((c - lag) & MASK)] + ring[base + (int) ((c - 2L * lag) & MASK)];
-            double dd = d;
-            sumSquares[octave] += dd * dd;
-            terms[octave]++;
+    /** Level 0, every sample: lags 1, 2, 4 and 8, written out for speed. */
+    private void addLevelZero(long x) {
+        long c = counts[0];
+        int p = (int) (c & MASK);
+        ring[p] = x;
+        counts[0] = c + 1;
+        if (c >= 16) {
+            double d1 = x - 2 * ring[(p - 1) & MASK] + ring[(p - 2) & MASK];
+            double d2 = x - 2 * ring[(p - 2) & MASK] + ring[(p - 4) & MASK];
+            double d4 = x - 2 * ring[(p - 4) & MASK] + ring[(p - 8) & MASK];
+            double d8 = x - 2 * ring[(p - 8) & MASK] + ring[(p - 16) & MASK];
+            sumSquares[0] += d1 * d1;
+            sumSquares[1] += d2 * d2;
+            sumSquares[2] += d4 * d4;
+            sumSquares[3] += d8 * d8;
+            terms[0]++;
+            terms[1]++;
+            terms[2]++;
+            terms[3]++;
+            return;
+        }
+        for (int k = 0; k < 4; k++) {
+            int lag = 1 << k;
+            if (c >= 2L * lag) {
+                double d = x - 2 * ring[(p - lag) & MASK] + ring[(p - 2 * lag) & MASK];
+                sumSquares[k] += d * d;
+                terms[k]++;
+            }
         }
     }
 
