@@ -38,7 +38,7 @@ final class MeasurementTable {
                     + SiFormat.format(f.periodStandardUncertaintySeconds(), "s", 2) + ")");
             row(out, "high", interval(m.high()));
             row(out, "low", interval(m.low()));
-            row(out, "duty", SiFormat.percent(m.duty(), 3) + "  (u " + SiFormat.percent(m.dutyStandardUncertainty(), 3)
+            row(out, "duty", SiFormat.percent(m.duty(), 3) + "  (u " + String.format(Locale.ROOT, "%.2g %%", m.dutyStandardUncertainty() * 100)
                     + ")");
             Measurement.Jitter j = m.jitter();
             row(out, "period jitter", SiFormat.format(j.periodRmsSeconds(), "s", 3) + " RMS, "
