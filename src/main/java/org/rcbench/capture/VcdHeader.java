@@ -180,7 +180,8 @@ final class VcdHeader {
             if (t.is("$end")) {
                 return args;
             }
-            if (!freeText && t.in.buf[t.start] == '$') {
+            boolean codeOfVar = keyword.equals("$var") && args.size() == 2; // a code may begin with $
+            if (!freeText && !codeOfVar && t.in.buf[t.start] == '$') {
                 throw new BadInputException(where, keyword + " has no closing $end (found " + t.quoted()
                         + " on line " + t.tokenLine + ")");
             }

@@ -80,7 +80,7 @@ public record VcdTimescale(int exponent) {
         for (int e = 2; e >= -15; e--) {
             double unitsPerTick = new VcdTimescale(e).clockHz() / clockHz;
             double whole = Math.rint(unitsPerTick);
-            if (whole >= 1 && Math.abs(unitsPerTick - whole) <= 1e-9 * whole) {
+            if (whole >= 1 && Math.abs(unitsPerTick - whole) <= 1e-6) {
                 return new VcdTimescale(e);
             }
         }

@@ -200,15 +200,30 @@ public final class VcdWriter implements Closeable, Flushable {
         }
     }
 
-    /** Identifier code number {@code i}: {@code !}..{@code ~}, then two characters, and so on (base 94). */
+    /**
+     * Identifier code number {@code i}: one printable character {@code !}..{@code ~} other than
+     * {@code $} (which other tools may take for a keyword), then two, and so on.
+     */
     static byte[] code(int i) {
         StringBuilder sb = new StringBuilder();
         int v = i;
         do {
-            sb.append((char) ('!' + v % 94));
-            v = v / 94 - 1;
+            sb.append(CODE_CHARS.charAt(v % CODE_CHARS.length()));
+            v = v / CODE_CHARS.length() - 1;
         } while (v >= 0);
         return sb.toString().getBytes(StandardCharsets.US_ASCII);
+    }
+
+    private static final String CODE_CHARS = codeChars();
+
+    private static String codeChars() {
+        StringBuilder sb = new StringBuilder();
+        for (char c = '!'; c <= '~'; c++) {
+            if (c != '$') {
+                sb.append(c);
+            }
+        }
+        return sb.toString();
     }
 
     private static List<String> path(String name, int channel) {
