@@ -28,7 +28,7 @@ import org.rcbench.testing.ChunkedInputStream;
 import org.rcbench.testing.RecordingSink.Edge;
 
 /** Property tests of the readers and writers over random valid and randomly damaged files. */
-class CaptureFileProperties {
+class CaptureFilePropertiesTest {
     private static final String NOISE = "0123456789,x#\n\r $!=b";
     private static final Pattern WHERE = Pattern.compile("^t\\.(rce|vcd):[0-9]+: [^\\n]+$");
 
@@ -150,7 +150,7 @@ class CaptureFileProperties {
     void damagedVcdGivesAResultOrOneLineNamingFileAndLine(@ForAll long seed,
             @ForAll @IntRange(min = 1, max = 6) int damages) throws IOException {
         byte[] fixture;
-        try (InputStream in = CaptureFileProperties.class.getResourceAsStream("layout-18-2.vcd")) {
+        try (InputStream in = CaptureFilePropertiesTest.class.getResourceAsStream("layout-18-2.vcd")) {
             fixture = in.readAllBytes();
         }
         readDamaged(damage(fixture, seed, damages), "t.vcd");
