@@ -10,7 +10,6 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.OpenOption;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.Map;
 import java.util.zip.GZIPOutputStream;
 import org.rcbench.common.BadInputException;
@@ -173,7 +172,7 @@ public final class EdgeCaptureWriter implements Closeable, Flushable {
     private static EdgeCaptureHeader checkHeader(byte[] text) throws IOException {
         LineCursor cur = new LineCursor(new ByteInput(new ByteArrayInputStream(text), false), "header");
         try {
-            return EdgeCaptureHeader.read(cur, new ArrayList<>());
+            return EdgeCaptureHeader.read(cur, new Warnings());
         } catch (BadInputException e) {
             throw new IllegalArgumentException("header would not read back: " + e.getMessage(), e);
         }

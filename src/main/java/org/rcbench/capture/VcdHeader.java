@@ -38,13 +38,13 @@ final class VcdHeader {
     private final List<String> scopes = new ArrayList<>();
     private int comments;
 
-    static VcdHeader read(VcdTokens t, List<String> warnings) throws IOException {
+    static VcdHeader read(VcdTokens t, Warnings warnings) throws IOException {
         VcdHeader h = new VcdHeader();
         h.readDeclarations(t, warnings);
         return h;
     }
 
-    private void readDeclarations(VcdTokens t, List<String> warnings) throws IOException {
+    private void readDeclarations(VcdTokens t, Warnings warnings) throws IOException {
         for (;;) {
             if (!t.next()) {
                 throw new BadInputException(t.where(), "file ends inside the header (no $enddefinitions)");
@@ -101,14 +101,14 @@ final class VcdHeader {
                     throw new BadInputException(where, keyword + " before $enddefinitions");
                 default -> {
                     untilEnd(t, keyword);
-                    warnings.add(where + ": unknown header command " + Snippet.quote(keyword) + " skipped");
+                    warnings.add(where, "unknown header command " + Snippet.quote(keyword) + " skipped");
                 }
             }
         }
     }
 
     /** {@code $var type size code reference [bit-select] $end}. */
-    private void declare(List<String> args, String where, List<String> warnings) {
+    private void declare(List<String> args, String where, Warnings warnings) {
         if (args.size() < 4) {
             throw new BadInputException(where, "$var needs a type, a size, an identifier code and a name, found "
                     + Snippet.quote(String.join(" ", args)));
@@ -128,7 +128,7 @@ final class VcdHeader {
             reason = (size == 8 || size == 11 || size == 18 ? "an " : "a ") + size + "-bit vector";
         } else if (channels.size() > EdgeCaptureFormat.MAX_CHANNEL) {
             reason = "beyond the first " + (EdgeCaptureFormat.MAX_CHANNEL + 1) + " 1-bit wires";
-            warnings.add(where + ": more than " + (EdgeCaptureFormat.MAX_CHANNEL + 1) + " 1-bit wires; "
+            warnings.add(where, "more than " + (EdgeCaptureFormat.MAX_CHANNEL + 1) + " 1-bit wires; "
                     + path + " is not read");
         }
         if (reason != null) {

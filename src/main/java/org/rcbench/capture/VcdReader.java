@@ -1,7 +1,6 @@
 package org.rcbench.capture;
 
 import java.io.IOException;
-import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Collections;
 import java.util.List;
@@ -28,7 +27,7 @@ final class VcdReader implements Capture {
 
     private final VcdTokens t;
     private final VcdHeader header;
-    private final List<String> warnings = new ArrayList<>();
+    private final Warnings warnings = new Warnings();
     private boolean streamed;
 
     VcdReader(ByteInput in, String name) throws IOException {
@@ -63,7 +62,7 @@ final class VcdReader implements Capture {
 
     @Override
     public List<String> warnings() {
-        return Collections.unmodifiableList(warnings);
+        return warnings.list();
     }
 
     @Override
@@ -121,10 +120,10 @@ final class VcdReader implements Capture {
             }
         }
         if (openBlock != null) {
-            warnings.add(t.where() + ": file ends inside " + openBlock + " (no $end)");
+            warnings.add(t.where(), "file ends inside " + openBlock + " (no $end)");
         }
         if (t.in.cutShort) {
-            warnings.add(t.where() + ": the compressed data ends early (the file was cut short); "
+            warnings.add(t.where(), "the compressed data ends early (the file was cut short); "
                     + "everything before this line was read");
         }
         sink.onEnd(time);
@@ -157,7 +156,7 @@ final class VcdReader implements Capture {
         String where = t.where();
         skipUntilEnd(keyword, where);
         if (!keyword.equals("$comment")) {
-            warnings.add(where + ": unknown command " + Snippet.quote(keyword) + " skipped");
+            warnings.add(where, "unknown command " + Snippet.quote(keyword) + " skipped");
         }
         return openBlock;
     }
