@@ -95,7 +95,7 @@ public final class CaptureFiles {
             i++;
         }
         if (i < in.limit && in.buf[i] == '$') {
-            throw new BadInputException(name, "IEEE 1364 VCD reading is not in this build yet");
+            return new VcdReader(in, name);
         }
         if (in.limit == in.pos) {
             throw new BadInputException(name + ":1", "empty file: expected the first line \""

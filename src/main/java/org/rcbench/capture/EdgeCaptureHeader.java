@@ -11,7 +11,6 @@ import java.time.format.DateTimeParseException;
 import java.util.Collections;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
-import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
 import org.rcbench.common.BadInputException;
@@ -43,7 +42,7 @@ final class EdgeCaptureHeader {
     }
 
     /** Reads the header; leaves the cursor at the first line after the column line. */
-    static EdgeCaptureHeader read(LineCursor cur, List<String> warnings) throws IOException {
+    static EdgeCaptureHeader read(LineCursor cur, Warnings warnings) throws IOException {
         readMagic(cur);
         Map<String, String> fields = new LinkedHashMap<>();
         Map<String, Long> keyLines = new HashMap<>();
@@ -160,7 +159,7 @@ final class EdgeCaptureHeader {
         return ch;
     }
 
-    private static void checkTimestamp(LineCursor cur, String value, List<String> warnings) {
+    private static void checkTimestamp(LineCursor cur, String value, Warnings warnings) {
         try {
             OffsetDateTime.parse(value);
             return;
@@ -176,7 +175,7 @@ final class EdgeCaptureHeader {
         try {
             LocalDateTime.parse(value);
         } catch (DateTimeParseException e) {
-            warnings.add(cur.where() + ": started " + Snippet.quote(value)
+            warnings.add(cur.where(), "started " + Snippet.quote(value)
                     + " is not an ISO-8601 date and time; kept as text");
         }
     }

@@ -1,8 +1,6 @@
 package org.rcbench.capture;
 
 import java.io.IOException;
-import java.util.ArrayList;
-import java.util.Collections;
 import java.util.List;
 import java.util.Map;
 import org.rcbench.common.BadInputException;
@@ -34,7 +32,7 @@ final class EdgeCaptureReader implements Capture {
 
     private final LineCursor cur;
     private final EdgeCaptureHeader header;
-    private final List<String> warnings = new ArrayList<>();
+    private final Warnings warnings = new Warnings();
     private boolean streamed;
 
     /** Tick of the last data line, for the never-decreasing check. */
@@ -68,7 +66,7 @@ final class EdgeCaptureReader implements Capture {
 
     @Override
     public List<String> warnings() {
-        return Collections.unmodifiableList(warnings);
+        return warnings.list();
     }
 
     @Override
@@ -145,7 +143,7 @@ final class EdgeCaptureReader implements Capture {
         }
         cur.line = line;
         if (in.cutShort) {
-            warnings.add(cur.where() + ": the compressed data ends early (the file was cut short); "
+            warnings.add(cur.where(), "the compressed data ends early (the file was cut short); "
                     + "everything before this line was read");
         }
         sink.onEnd(Math.max(last, endTick));
@@ -169,7 +167,7 @@ final class EdgeCaptureReader implements Capture {
         DataLine d = new DataLine(b, cur.start, cur.end);
         if (d.problem != null) {
             if (!cur.terminated && d.cutShort) {
-                warnings.add(cur.where() + ": last line " + cur.quoted() + " is cut short (no newline at the end"
+                warnings.add(cur.where(), "last line " + cur.quoted() + " is cut short (no newline at the end"
                         + " of the file, as a recorder stopped mid-write leaves it); ignored");
                 cur.consume();
                 return true;
@@ -210,10 +208,10 @@ final class EdgeCaptureReader implements Capture {
         }
         long v = DataLine.parseTick(b, from, to);
         if (v < 0) {
-            warnings.add(cur.where() + ": end_tick " + Snippet.quote(b, from, to)
+            warnings.add(cur.where(), "end_tick " + Snippet.quote(b, from, to)
                     + " is not a whole number of ticks; ignored");
         } else if (v < lastTick) {
-            warnings.add(cur.where() + ": end_tick " + v + " is before the last data line's tick " + lastTick
+            warnings.add(cur.where(), "end_tick " + v + " is before the last data line's tick " + lastTick
                     + "; ignored");
         } else {
             endTick = Math.max(endTick, v);

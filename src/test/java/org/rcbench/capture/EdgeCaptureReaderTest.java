@@ -154,6 +154,18 @@ class EdgeCaptureReaderTest {
     }
 
     @Test
+    void warningsStopGrowingAfterAHundred() {
+        StringBuilder sb = new StringBuilder("# rcbench edges v1\n# clock_hz=10\ntick,channel,level\n");
+        for (int i = 0; i < 150; i++) {
+            sb.append("# end_tick=soon\n");
+        }
+        java.util.List<String> w = Read.of(sb.toString()).warnings();
+        assertThat(w).hasSize(101);
+        assertThat(w.get(0)).isEqualTo("t.rce:4: end_tick \"soon\" is not a whole number of ticks; ignored");
+        assertThat(w.get(100)).isEqualTo("t.rce:153: 50 more warnings not shown (the last is on this line)");
+    }
+
+    @Test
     void byteOrderMarkIsSkipped() {
         Read r = Read.of("\uFEFF# rcbench edges v1\n# clock_hz=10\ntick,channel,level\n1,0,1\n");
         assertThat(r.lines()).containsExactly("1,0,1");

@@ -22,6 +22,10 @@ record Read(String name, Timebase timebase, Map<String, String> header, Map<Inte
         return of(new ByteArrayInputStream(bytes), "t.rce");
     }
 
+    static Read of(InputStream in) {
+        return of(in, "t.vcd");
+    }
+
     static Read of(InputStream in, String name) {
         try (Capture c = CaptureFiles.open(in, name)) {
             RecordingSink sink = new RecordingSink();
