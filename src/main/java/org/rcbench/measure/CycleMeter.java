@@ -54,6 +54,8 @@ public final class CycleMeter implements EdgeSink {
     private int pendingLevelA = NONE;
     private long pendingTickB;
     private int pendingLevelB = NONE;
+    private boolean pendingAIsFirst;
+    private boolean fresh = true;
     private long lastTick = -1;
     private int lastLevel = NONE;
     private long rise = -1;
@@ -166,18 +168,23 @@ public final class CycleMeter implements EdgeSink {
                 gaps++;
             }
             inGap = true;
+            fresh = true;
             breakRun();
             lastTick = -1;
             lastLevel = NONE;
             return;
         }
         inGap = false;
+        // The first edge after the start or a gap may only state a level (a VCD's initial value),
+        // so the pulse before the next edge is never judged a runt.
+        boolean first = fresh;
+        fresh = false;
         if (pendingLevelB != NONE) {
             // Two edges wait. The older pulse (A to B) is judged now that the pulse after it is
             // known: when both are runts the relatively shorter one goes, so a dropout just after
             // a rising edge removes the dropout, not the short first part of the high pulse.
             boolean newerRunt = isRunt(pendingTickB, pendingLevelB, tick, level);
-            boolean olderRunt = isRunt(pendingTickA, pendingLevelA, pendingTickB, pendingLevelB);
+            boolean olderRunt = !pendingAIsFirst && isRunt(pendingTickA, pendingLevelA, pendingTickB, pendingLevelB);
             if (olderRunt && newerRunt
                     && relative(pendingTickB, pendingLevelB, tick) < relative(pendingTickA, pendingLevelA, pendingTickB)) {
                 glitches++;
@@ -188,12 +195,14 @@ public final class CycleMeter implements EdgeSink {
                 glitches++;
                 pendingTickA = tick;
                 pendingLevelA = level;
+                pendingAIsFirst = false;
                 pendingLevelB = NONE;
                 return;
             }
             commit(pendingTickA, pendingLevelA);
             pendingTickA = pendingTickB;
             pendingLevelA = pendingLevelB;
+            pendingAIsFirst = false;
             pendingTickB = tick;
             pendingLevelB = level;
         } else if (pendingLevelA != NONE) {
@@ -202,6 +211,7 @@ public final class CycleMeter implements EdgeSink {
         } else {
             pendingTickA = tick;
             pendingLevelA = level;
+            pendingAIsFirst = first;
         }
     }
 
@@ -218,7 +228,8 @@ public final class CycleMeter implements EdgeSink {
     }
 
     private void flushPending() {
-        if (pendingLevelB != NONE && isRunt(pendingTickA, pendingLevelA, pendingTickB, pendingLevelB)) {
+        if (pendingLevelB != NONE && !pendingAIsFirst
+                && isRunt(pendingTickA, pendingLevelA, pendingTickB, pendingLevelB)) {
             glitches++;
         } else {
             if (pendingLevelA != NONE) {

@@ -98,6 +98,41 @@ class MeasureCommandTest {
     }
 
     @Test
+    void vcdWireIsMeasuredByName() throws IOException {
+        // IEEE 1364 VCD, timescale 1 us: wire "out" toggles 300 us high, 700 us low (1 kHz, duty 0.3).
+        StringBuilder sb = new StringBuilder("$timescale 1 us $end\n$scope module board $end\n"
+                + "$var wire 1 ! clk $end\n$var wire 1 \" out $end\n$upscope $end\n$enddefinitions $end\n"
+                + "#0\n$dumpvars\n0!\n0\"\n$end\n");
+        long t = 10;
+        for (int k = 0; k < 100; k++) {
+            sb.append('#').append(t).append("\n1\"\n1!\n#").append(t + 300).append("\n0\"\n0!\n");
+            t += 1000;
+        }
+        sb.append('#').append(t).append("\n1\"\n");
+        Path file = dir.resolve("board.vcd");
+        Files.writeString(file, sb.toString(), StandardCharsets.UTF_8);
+        CliRun run = CliRun.of("measure", file.toString(), "--channel", "out", "--json", "--clock-tolerance-ppm", "0");
+        assertThat(run.exitCode()).as(run.err()).isZero();
+        JsonNode j = new ObjectMapper().readTree(run.out());
+        assertThat(j.get("cycles").asLong()).isEqualTo(100);
+        assertThat(j.get("frequency_hz").asDouble()).isCloseTo(1000, within(1e-9));
+        assertThat(j.get("duty").asDouble()).isCloseTo(0.3, within(1e-12));
+        assertThat(j.get("channel_name").asText()).endsWith("out");
+    }
+
+    @Test
+    void unmeasurableFiguresAreNullInJson() throws IOException {
+        Path file = dir.resolve("empty.rce");
+        Files.writeString(file, "# rcbench edges v1\n# clock_hz=1000000\ntick,channel,level\n", StandardCharsets.UTF_8);
+        CliRun run = CliRun.of("measure", file.toString(), "--json");
+        assertThat(run.exitCode()).as(run.err()).isZero();
+        JsonNode j = new ObjectMapper().readTree(run.out());
+        assertThat(j.get("cycles").asLong()).isZero();
+        assertThat(j.get("frequency_hz").isNull()).isTrue();
+        assertThat(j.get("allan").size()).isZero();
+    }
+
+    @Test
     void missingFileIsOneLineAndExitTwo() {
         CliRun run = CliRun.of("measure", dir.resolve("nope.rce").toString());
         assertThat(run.exitCode()).isEqualTo(ExitCodes.BAD_INPUT);
