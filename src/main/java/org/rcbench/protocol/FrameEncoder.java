@@ -137,7 +137,7 @@ public final class FrameEncoder {
     }
 
     /**
-     * One ADC frame: {@code count} samples from {@code off} (at most 109), the first taken at
+     * One ADC frame: {@code count} samples from {@code off} (at most 116), the first taken at
      * probe tick {@code firstTick}, then one every {@code periodTicks}.
      */
     public void adc(int channel, int resolutionBits, int fullScaleMv, long periodTicks, long firstTick,
