@@ -16,8 +16,8 @@
 #include <stdint.h>
 #include <string.h>
 #include <util/atomic.h>
-#include <util/crc16.h>
 
+#include "frames.h"
 #include "rcbench_protocol.h"
 
 #ifndef F_CPU
@@ -189,47 +189,14 @@ static int uart_get(void) {
 
 /* ---- frames ------------------------------------------------------------------------------- */
 
-/*
- * Two frame buffers: edges are collected in edge_frame while hello and acks are built in ctl_frame,
- * so a command answered mid-frame cannot disturb pending edges. Layout: type, seq, payload, CRC.
- */
-static uint8_t edge_frame[RCB_MAX_FRAME];
-static uint8_t ctl_frame[64];
-static uint8_t tx_seq;
+static uint8_t ctl_frame[64]; /* hello and acks; edges are built in frames.c */
 static uint32_t last_send_tick; /* low 32 bits of the tick when the last frame went out */
 
-/* Sends frame[2..2+payload_len) as a frame of this type: adds type, seq and CRC, COBS-encodes, delimits. */
-static void send_frame(uint8_t *frame, uint8_t type, uint8_t payload_len) {
-    uint8_t n = RCB_HEADER + payload_len;
-    frame[0] = type;
-    frame[1] = tx_seq++;
-    uint16_t crc = 0xFFFF; /* CRC-16/IBM-3740: _crc_xmodem_update is its step, from 0xFFFF */
-    for (uint8_t i = 0; i < n; i++) {
-        crc = _crc_xmodem_update(crc, frame[i]);
-    }
-    frame[n++] = (uint8_t) crc;
-    frame[n++] = (uint8_t) (crc >> 8);
-    /* COBS, one group at a time: find the next zero (or the end), send its distance, then the data. */
-    uint8_t start = 0;
-    while (start <= n) {
-        uint8_t end = start;
-        while (end < n && frame[end] != 0 && end - start < 254) {
-            end++;
-        }
-        uart_put((uint8_t) (end - start + 1));
-        for (uint8_t i = start; i < end; i++) {
-            uart_put(frame[i]);
-        }
-        if (end - start == 254 && end < n) {
-            start = end; /* a full group implies no zero */
-        } else {
-            start = end + 1;
-        }
-        if (end == n) {
-            break;
-        }
-    }
-    uart_put(RCB_DELIMITER);
+void rcb_put(uint8_t b) {
+    uart_put(b);
+}
+
+void rcb_sent(void) {
     ATOMIC_BLOCK(ATOMIC_RESTORESTATE) {
         last_send_tick = (uint32_t) now_locked();
     }
@@ -237,13 +204,6 @@ static void send_frame(uint8_t *frame, uint8_t type, uint8_t payload_len) {
 
 static uint8_t put_u32(uint8_t *frame, uint8_t at, uint32_t v) {
     for (uint8_t i = 0; i < 4; i++) {
-        frame[at++] = (uint8_t) (v >> (8 * i));
-    }
-    return at;
-}
-
-static uint8_t put_u48(uint8_t *frame, uint8_t at, uint64_t v) {
-    for (uint8_t i = 0; i < 6; i++) {
         frame[at++] = (uint8_t) (v >> (8 * i));
     }
     return at;
@@ -286,72 +246,17 @@ static void send_hello(uint8_t at_boot) {
     frame[p++] = sizeof PROBE_NAME - 1;
     memcpy(&frame[p], PROBE_NAME, sizeof PROBE_NAME - 1);
     p += sizeof PROBE_NAME - 1;
-    send_frame(frame, RCB_T_HELLO, p - RCB_HEADER);
+    rcb_send_frame(frame, RCB_T_HELLO, p - RCB_HEADER);
 }
 
 static void send_ack(uint8_t type, uint8_t seq, uint8_t status) {
     ctl_frame[2] = type;
     ctl_frame[3] = seq;
     ctl_frame[4] = status;
-    send_frame(ctl_frame, RCB_T_ACK, 3);
+    rcb_send_frame(ctl_frame, RCB_T_ACK, 3);
 }
 
 /* ---- edge frames -------------------------------------------------------------------------- */
-
-static uint8_t items_end;      /* end of the items in frame[] */
-static uint8_t edges_pending;  /* edges in the frame being built */
-static uint64_t frame_base;    /* tick of its first edge */
-static uint64_t last_edge;     /* tick of its last edge */
-static uint32_t dropped_total; /* edges lost since reset, as sent */
-
-static void edges_begin(uint64_t base) {
-    frame_base = base;
-    last_edge = base;
-    items_end = RCB_HEADER + RCB_EDGES_FIXED;
-    edges_pending = 0;
-}
-
-static void edges_send(uint64_t base) {
-    uint8_t p = put_u48(edge_frame, RCB_HEADER, base);
-    put_u32(edge_frame, p, dropped_total);
-    send_frame(edge_frame, RCB_T_EDGES, items_end - RCB_HEADER);
-    edges_pending = 0;
-    items_end = RCB_HEADER + RCB_EDGES_FIXED;
-}
-
-static void edges_flush(void) {
-    if (edges_pending) {
-        edges_send(frame_base);
-    }
-}
-
-static void edges_add(uint64_t tick, uint8_t level, uint8_t drops_before) {
-    if (drops_before) {
-        /* The protocol: end the frame, so the rise of dropped_total shows before this edge. */
-        edges_flush();
-        dropped_total += drops_before;
-    }
-    uint64_t delta = edges_pending ? tick - last_edge : 0;
-    if (edges_pending && (delta >> 40) != 0) {
-        edges_flush();
-        delta = 0;
-    }
-    if (items_end + RCB_MAX_ITEM_BYTES > RCB_HEADER + RCB_MAX_PAYLOAD) {
-        edges_flush();
-        delta = 0;
-    }
-    if (!edges_pending) {
-        edges_begin(tick);
-    }
-    uint64_t v = (delta << 4) | level; /* channel 0 */
-    while (v >= 0x80) {
-        edge_frame[items_end++] = (uint8_t) v | 0x80;
-        v >>= 7;
-    }
-    edge_frame[items_end++] = (uint8_t) v;
-    last_edge = tick;
-    edges_pending++;
-}
 
 /* Moves captured edges from the ring into frames; flushes and sends heartbeats on time. */
 static void edges_service(void) {
@@ -361,7 +266,7 @@ static void edges_service(void) {
         uint8_t level = ring_level[t];
         uint8_t drops = ring_drops[t];
         ring_tail = (t + 1) & (RING - 1);
-        edges_add(tick, level, drops);
+        rcb_edges_add(tick, 0, level, drops);
     }
     uint64_t now;
     uint8_t quiet;
@@ -375,12 +280,11 @@ static void edges_service(void) {
             pending_drops = 0;
         }
     }
-    if (edges_pending && now - frame_base >= FLUSH_TICKS) {
-        edges_flush();
+    if (rcb_edges_pending() && now - rcb_edges_first() >= FLUSH_TICKS) {
+        rcb_edges_flush();
     }
-    if (quiet && !edges_pending && ((uint32_t) now - last_send_tick >= HEARTBEAT_TICKS || late_drops)) {
-        dropped_total += late_drops;
-        edges_send(now);
+    if (quiet && !rcb_edges_pending() && ((uint32_t) now - last_send_tick >= HEARTBEAT_TICKS || late_drops)) {
+        rcb_edges_heartbeat(now, late_drops);
     }
 }
 
@@ -404,7 +308,7 @@ static void handle_command(uint8_t type, uint8_t seq, const uint8_t *p, uint8_t 
                 ring_tail = ring_head;
                 pending_drops = 0;
             }
-            edges_begin(0);
+            rcb_edges_reset();
             running = 1;
             capture_arm();
         }
@@ -414,7 +318,7 @@ static void handle_command(uint8_t type, uint8_t seq, const uint8_t *p, uint8_t 
         capture_disarm();
         running = 0;
         edges_service();
-        edges_flush();
+        rcb_edges_flush();
         send_ack(type, seq, RCB_ACK_OK);
         break;
     case RCB_T_SET_EDGES: {
@@ -457,24 +361,6 @@ static void handle_command(uint8_t type, uint8_t seq, const uint8_t *p, uint8_t 
     }
 }
 
-/* Undoes COBS in place; returns the decoded length, or -1 when the block is not valid. */
-static int16_t cobs_decode(uint8_t *b, uint8_t len) {
-    uint8_t in = 0, out = 0;
-    while (in < len) {
-        uint8_t code = b[in++];
-        if (code == 0 || in + code - 1 > len) {
-            return -1;
-        }
-        for (uint8_t k = 1; k < code; k++) {
-            b[out++] = b[in++];
-        }
-        if (code != 0xFF && in < len) {
-            b[out++] = 0;
-        }
-    }
-    return out;
-}
-
 static void commands_service(void) {
     for (int c; (c = uart_get()) >= 0;) {
         uint8_t b = (uint8_t) c;
@@ -499,7 +385,7 @@ static void commands_service(void) {
             }
             continue;
         }
-        int16_t n = cmd_overflow || cmd_len == 0 ? -1 : cobs_decode(cmd, cmd_len);
+        int16_t n = cmd_overflow || cmd_len == 0 ? -1 : rcb_cobs_decode(cmd, cmd_len);
         cmd_len = 0;
         cmd_overflow = 0;
         if (n < RCB_HEADER + RCB_TRAILER) {
@@ -507,7 +393,7 @@ static void commands_service(void) {
         }
         uint16_t crc = 0xFFFF;
         for (int16_t i = 0; i < n - RCB_TRAILER; i++) {
-            crc = _crc_xmodem_update(crc, cmd[i]);
+            crc = rcb_crc_update(crc, cmd[i]);
         }
         if (crc != (uint16_t) (cmd[n - 2] | (cmd[n - 1] << 8))) {
             continue; /* the host repeats what is not acknowledged */
