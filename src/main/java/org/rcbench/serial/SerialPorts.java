@@ -10,8 +10,12 @@ import java.util.Locale;
 import java.util.stream.Stream;
 import org.rcbench.common.BadInputException;
 import org.rcbench.probe.ByteTransport;
+import org.rcbench.edge.EdgeSink;
 import org.rcbench.probe.DtrPolicy;
+import org.rcbench.probe.ProbeSession;
+import org.rcbench.probe.SessionConfig;
 import org.rcbench.probe.TransportOpener;
+import org.rcbench.protocol.ProbeEvents;
 
 /**
  * Lists serial ports and makes openers for {@link org.rcbench.probe.ProbeSession}: by device path,
@@ -99,6 +103,15 @@ public final class SerialPorts {
                 return spec;
             }
         };
+    }
+
+    /**
+     * A session (not yet started) with the probe at {@code spec} (device path or USB id) at the
+     * reference firmware's 500 000 baud, using the DTR policy and read timeout of {@code config}.
+     */
+    public static ProbeSession session(String spec, SessionConfig config, EdgeSink sink, ProbeEvents events) {
+        return new ProbeSession(opener(spec, DEFAULT_BAUD, config.profile().dtr(), config.readTimeoutMillis()),
+                config, sink, events);
     }
 
     /** The device path of the port whose USB id matches {@code id} (serial optional), else a one-line error. */

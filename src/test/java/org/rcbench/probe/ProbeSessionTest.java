@@ -174,4 +174,30 @@ class ProbeSessionTest {
             assertThat(session.state()).isEqualTo(SessionState.RECONNECTING);
         }
     }
+
+    @Test
+    void memoryPortPlugsUnplugsAndReplugsASimulatedBoard() throws Exception {
+        MemoryPort port = new MemoryPort("simulated board");
+        ByteTransport board = port.plugIn();
+        ProbeEmulator probe = new ProbeEmulator(TransportStreams.output(board), 0x51);
+        TransportStreams.pump(board, probe);
+        probe.boot();
+        CollectingSink sink = new CollectingSink();
+        try (ProbeSession session = new ProbeSession(port, FAST, sink, new ProbeEvents() { })) {
+            session.start();
+            session.awaitStreaming(Duration.ofSeconds(10));
+            assertThat(probe.awaitStart(10_000)).isTrue();
+            probe.edges(new long[] {10, 20}, 1);
+            assertThat(CollectingSink.await(() -> sink.size() == 2)).isTrue();
+            port.unplug();
+            assertThat(CollectingSink.await(() -> session.state() == SessionState.RECONNECTING)).isTrue();
+            assertThat(session.status().line()).startsWith("simulated board disconnected");
+            ByteTransport again = port.plugIn();
+            ProbeEmulator back = new ProbeEmulator(TransportStreams.output(again), 0x51);
+            TransportStreams.pump(again, back);
+            back.boot();
+            assertThat(back.awaitStart(10_000)).isTrue();
+            assertThat(sink.calls()).containsExactly("0 0 1", "10 0 0", "10 0 ?");
+        }
+    }
 }
