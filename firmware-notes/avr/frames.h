@@ -8,6 +8,17 @@
 
 #include <stdint.h>
 
+/*
+ * Bits 16..47 of a 48-bit tick whose low 16 bits were captured by the 16-bit timer, given the
+ * overflows counted so far and whether an overflow is pending (flag set, interrupt not yet run).
+ * A pending overflow with a small captured value (< 0x8000) happened before the capture, so it
+ * counts; with a large value it happened after. Correct while the pending overflow and the
+ * capture are less than 0x8000 ticks apart (2 ms at 16 MHz); hostcheck/extend_check.c tests it.
+ */
+static inline uint32_t rcb_high_part(uint32_t overflows, uint16_t captured, uint8_t overflow_pending) {
+    return overflows + (overflow_pending && captured < 0x8000 ? 1 : 0);
+}
+
 /* Provided by the program: send one byte (the UART on the probe, a buffer in the host check). */
 void rcb_put(uint8_t b);
 /* Provided by the program: called after each frame is sent (the probe notes the time). */

@@ -66,16 +66,13 @@ static inline void lose(uint8_t n) {
 ISR(TIMER1_CAPT_vect) {
     uint16_t lo = ICR1; /* first: the capture register */
     uint8_t control = TCCR1B;
-    uint32_t hi = overflows;
     /*
-     * The overflow race: if Timer1 wrapped after this interrupt started but before its overflow
-     * interrupt ran, TOV1 is pending. A small captured value (< 0x8000) was taken after that wrap,
-     * so the pending overflow belongs before this capture; a large one was taken before it.
-     * Unsigned 16-bit differences survive one wrap only, hence the halfway test.
+     * The overflow race: Timer1 may have wrapped with its overflow interrupt not yet run (this
+     * interrupt has priority, or interrupts were off). A small captured value (< 0x8000) was taken
+     * after that wrap, so the pending overflow belongs before this capture; a large one was taken
+     * before it. Unsigned 16-bit differences survive one wrap only, hence the halfway test.
      */
-    if ((TIFR1 & _BV(TOV1)) && lo < 0x8000) {
-        hi++;
-    }
+    uint32_t hi = rcb_high_part(overflows, lo, (TIFR1 & _BV(TOV1)) != 0);
     uint8_t level = (control & _BV(ICES1)) ? 1 : 0;
     if (both_edges) {
         TCCR1B = control ^ _BV(ICES1);
@@ -108,10 +105,7 @@ ISR(TIMER1_CAPT_vect) {
 /* The current 48-bit tick, with the same overflow rule. Interrupts must be off. */
 static uint64_t now_locked(void) {
     uint16_t lo = TCNT1;
-    uint32_t hi = overflows;
-    if ((TIFR1 & _BV(TOV1)) && lo < 0x8000) {
-        hi++;
-    }
+    uint32_t hi = rcb_high_part(overflows, lo, (TIFR1 & _BV(TOV1)) != 0);
     return ((uint64_t) hi << 16) | lo;
 }
 

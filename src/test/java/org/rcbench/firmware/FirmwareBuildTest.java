@@ -82,6 +82,22 @@ class FirmwareBuildTest {
         assertThat(compared).isGreaterThan(30);
     }
 
+    @Test
+    void overflowExtensionRuleHoldsInEveryInterruptOrdering(@TempDir Path build) throws Exception {
+        // The rule from rcbench's platform notes (a pending overflow with a captured value below
+        // 0x8000 belongs before the capture), checked by hostcheck/extend_check.c against a model
+        // of Timer1 with the capture interrupt outranking the overflow interrupt (ATmega328P
+        // datasheet, interrupt vector table: lower vectors have higher priority).
+        Path gcc = ExternalTool.require("gcc", "gcc");
+        Path exe = build.resolve("extend_check");
+        Run compile = run(AVR, null, gcc.toString(), "-std=gnu99", "-O2", "-Wall", "-Wextra", "-Werror", "-o",
+                exe.toAbsolutePath().toString(), "hostcheck/extend_check.c");
+        assertThat(compile.exit()).as(compile.output()).isZero();
+        Run check = run(build, null, exe.toAbsolutePath().toString());
+        assertThat(check.exit()).as(check.output()).isZero();
+        assertThat(Long.parseLong(check.output().trim().split(" ")[0])).isGreaterThan(1_000_000);
+    }
+
     /** Decodes bytes into "tick channel level" calls and counters. */
     static List<String> decode(byte[] bytes, DecoderCounters[] counters) {
         List<String> calls = new ArrayList<>();
