@@ -200,4 +200,26 @@ class ProbeSessionTest {
             assertThat(sink.calls()).containsExactly("0 0 1", "10 0 0", "10 0 ?");
         }
     }
+
+    @Test
+    void sinkMadeFromTheHelloExistsBeforeTheFirstEdge() throws Exception {
+        Plugs plugs = new Plugs();
+        ProbeEmulator probe = plugIn(plugs, 0x61, true);
+        CollectingSink made = new CollectingSink();
+        long[] clock = new long[1];
+        SinkOnHello sink = new SinkOnHello(hello -> {
+            clock[0] = hello.clockHz();
+            return made;
+        }, new ProbeEvents() { });
+        try (ProbeSession session = new ProbeSession(plugs, FAST, sink, sink)) {
+            session.start();
+            session.awaitStreaming(Duration.ofSeconds(10));
+            assertThat(probe.awaitStart(10_000)).isTrue();
+            probe.edges(new long[] {5, 9}, 0);
+            assertThat(CollectingSink.await(() -> made.size() == 2)).isTrue();
+        }
+        assertThat(clock[0]).isEqualTo(16_000_000L);
+        assertThat(made.calls()).containsExactly("0 0 0", "4 0 1");
+        assertThat(made.ended()).isTrue();
+    }
 }
