@@ -1,6 +1,5 @@
 package org.rcbench.probe;
 
-import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.time.Duration;
 import java.util.List;
@@ -9,16 +8,12 @@ import java.util.concurrent.CopyOnWriteArrayList;
 import org.rcbench.common.BadInputException;
 import org.rcbench.edge.EdgeSink;
 import org.rcbench.edge.Timebase;
-import org.rcbench.protocol.Ack;
 import org.rcbench.protocol.DecoderCounters;
-import org.rcbench.protocol.FrameEncoder;
 import org.rcbench.protocol.Hello;
 import org.rcbench.protocol.HostCommand;
 import org.rcbench.protocol.ProbeEvents;
 import org.rcbench.protocol.StreamDecoder;
-import org.rcbench.protocol.TextLines;
 import org.rcbench.protocol.Trouble;
-import org.rcbench.protocol.Wire;
 
 /**
  * A live connection to one probe: opens the transport, waits for the hello through boot noise,
@@ -41,13 +36,11 @@ public final class ProbeSession implements AutoCloseable {
 
     private final TransportOpener opener;
     private final SessionConfig config;
-    private final EdgeSink sink;
-    private final ProbeEvents events;
     private final StreamDecoder decoder;
     private final List<SessionListener> listeners = new CopyOnWriteArrayList<>();
     private final Object monitor = new Object();
-    private final ByteArrayOutputStream commandBytes = new ByteArrayOutputStream();
-    private final FrameEncoder commands = new FrameEncoder(commandBytes);
+    private final ProbeCommands commands = new ProbeCommands();
+    private final SessionTap tap;
 
     private volatile SessionStatus status;
     private volatile ByteTransport transport;
@@ -58,10 +51,6 @@ public final class ProbeSession implements AutoCloseable {
     private BadInputException failure;
     private Thread reader;
     private int reconnects;
-    // Reader-thread state.
-    private boolean gateOpen;
-    private Hello helloThisConnection;
-    private boolean startAcked;
 
     /**
      * @param opener opens (and after a disconnect, reopens) the probe's transport
@@ -72,9 +61,23 @@ public final class ProbeSession implements AutoCloseable {
     public ProbeSession(TransportOpener opener, SessionConfig config, EdgeSink sink, ProbeEvents events) {
         this.opener = opener;
         this.config = config;
-        this.sink = sink;
-        this.events = events;
-        this.decoder = new StreamDecoder(new GatedSink(), new SessionEvents(), config.mode());
+        this.tap = new SessionTap(sink, events, new SessionTap.Session() {
+            @Override
+            public boolean sameProbe(Hello h) {
+                return ProbeSession.this.sameProbe(h);
+            }
+
+            @Override
+            public void helloWhileStreaming(Hello h) {
+                hello = h;
+                ByteTransport t = transport;
+                if (h.atBoot() && t != null) {
+                    // The probe reset (the decoder has marked the gap): start the capture again.
+                    sendCaptureCommands(t);
+                }
+            }
+        });
+        this.decoder = new StreamDecoder(tap, tap, config.mode());
         this.status = new SessionStatus(SessionState.CONNECTING, "opening " + opener.name(), opener.name(), null,
                 decoder.counters(), 0, 0);
     }
@@ -157,7 +160,7 @@ public final class ProbeSession implements AutoCloseable {
     public void requestHello() {
         ByteTransport t = transport;
         if (t != null) {
-            writeHelloRequest(t);
+            commands.helloRequest(t, decoder.mode() != StreamDecoder.Mode.TEXT);
         }
     }
 
@@ -165,7 +168,7 @@ public final class ProbeSession implements AutoCloseable {
     public void send(HostCommand command) {
         ByteTransport t = transport;
         if (t != null) {
-            writeCommands(t, command);
+            commands.send(t, command);
         }
     }
 
@@ -175,7 +178,7 @@ public final class ProbeSession implements AutoCloseable {
         closing = true;
         ByteTransport t = transport;
         if (t != null && decoder.mode() == StreamDecoder.Mode.BINARY && state() == SessionState.STREAMING) {
-            writeCommands(t, HostCommand.stop());
+            commands.send(t, HostCommand.stop());
         }
         Thread r = reader;
         if (r != null && r != Thread.currentThread()) {
@@ -259,8 +262,7 @@ public final class ProbeSession implements AutoCloseable {
     }
 
     private Outcome waitForHello(ByteTransport t) {
-        helloThisConnection = null;
-        gateOpen = false;
+        tap.newConnection();
         long startedAt = System.nanoTime();
         long bootQuiet = config.profile().bootQuiet().toNanos();
         long timeout = config.profile().helloTimeout().toNanos();
@@ -273,7 +275,7 @@ public final class ProbeSession implements AutoCloseable {
             if (n < 0) {
                 return Outcome.GONE;
             }
-            Hello h = helloThisConnection;
+            Hello h = tap.connectionHello;
             if (h != null) {
                 if (!sameProbe(h)) {
                     notice = "a different probe (" + h.probeIdHex() + ") answered on " + t.name()
@@ -285,7 +287,7 @@ public final class ProbeSession implements AutoCloseable {
             }
             long now = System.nanoTime();
             if (now >= nextRequest) {
-                writeHelloRequest(t);
+                commands.helloRequest(t, decoder.mode() != StreamDecoder.Mode.TEXT);
                 nextRequest = now + HELLO_REPEAT_NANOS;
             }
             if (now - startedAt > timeout) {
@@ -317,26 +319,26 @@ public final class ProbeSession implements AutoCloseable {
     }
 
     private void startCapture(ByteTransport t) {
-        hello = helloThisConnection;
-        gateOpen = true;
+        hello = tap.connectionHello;
+        tap.gateOpen = true;
         sendCaptureCommands(t);
         publish(SessionState.STREAMING, streamingLine(t));
     }
 
     private void sendCaptureCommands(ByteTransport t) {
-        startAcked = false;
+        tap.startAcked = false;
         if (decoder.mode() == StreamDecoder.Mode.TEXT) {
             return; // text-mode probes stream all the time
         }
-        Hello h = helloThisConnection;
+        Hello h = hello;
         int all = (1 << Math.min(8, h.channelCount())) - 1;
         int channels = config.channelMask() == 0 ? all : config.channelMask() & all;
         HostCommand edges = HostCommand.edges(channels, config.risingMask() & channels,
                 config.fallingMask() & channels);
         if (config.adcRateHz() > 0 && config.adcChannelMask() != 0) {
-            writeCommands(t, edges, HostCommand.adc(config.adcChannelMask(), config.adcRateHz()), HostCommand.start());
+            commands.send(t, edges, HostCommand.adc(config.adcChannelMask(), config.adcRateHz()), HostCommand.start());
         } else {
-            writeCommands(t, edges, HostCommand.start());
+            commands.send(t, edges, HostCommand.start());
         }
     }
 
@@ -352,7 +354,7 @@ public final class ProbeSession implements AutoCloseable {
                 return Outcome.GONE;
             }
             long now = System.nanoTime();
-            if (!startAcked && decoder.mode() == StreamDecoder.Mode.BINARY
+            if (!tap.startAcked && decoder.mode() == StreamDecoder.Mode.BINARY
                     && now - startSentAt > config.ackTimeoutMillis() * 1_000_000L && startAttempts < START_ATTEMPTS) {
                 sendCaptureCommands(t);
                 startSentAt = now;
@@ -408,41 +410,6 @@ public final class ProbeSession implements AutoCloseable {
         return n;
     }
 
-    // ---- writing -------------------------------------------------------------------------------
-
-    private void writeHelloRequest(ByteTransport t) {
-        byte[] text = TextLines.bytes("\n" + TextLines.HELLO_REQUEST);
-        write(t, text, text.length);
-        if (decoder.mode() != StreamDecoder.Mode.TEXT) {
-            writeCommands(t, HostCommand.helloRequest());
-        }
-    }
-
-    private void writeCommands(ByteTransport t, HostCommand... list) {
-        byte[] bytes;
-        synchronized (commandBytes) {
-            commandBytes.reset();
-            commandBytes.write(Wire.DELIMITER);
-            try {
-                for (HostCommand c : list) {
-                    commands.command(c);
-                }
-            } catch (IOException e) {
-                throw new IllegalStateException("in-memory write failed", e);
-            }
-            bytes = commandBytes.toByteArray();
-        }
-        write(t, bytes, bytes.length);
-    }
-
-    private static void write(ByteTransport t, byte[] b, int len) {
-        try {
-            t.write(b, 0, len);
-        } catch (IOException e) {
-            // The reader sees the transport gone and reports the disconnect.
-        }
-    }
-
     // ---- status --------------------------------------------------------------------------------
 
     private String streamingLine(ByteTransport t) {
@@ -451,7 +418,7 @@ public final class ProbeSession implements AutoCloseable {
         String quiet = h != null && h.sendsHeartbeats() && silent > 2000
                 ? "; nothing received for " + seconds(silent * 1_000_000) : "";
         return "streaming from " + (h == null ? "probe" : h.summary()) + " on " + t.name() + ": "
-                + decoder.counters().summary() + (notice.isEmpty() ? "" : "; " + notice) + quiet;
+                + decoder.counters().summary() + (tap.refusal.isEmpty() ? "" : "; " + tap.refusal) + quiet;
     }
 
     private String bytesLine() {
@@ -491,79 +458,6 @@ public final class ProbeSession implements AutoCloseable {
             Thread.sleep(millis);
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
-        }
-    }
-
-    /** Passes edges on only while streaming: edges sent before the hello belong to nobody. */
-    private final class GatedSink implements EdgeSink {
-        @Override
-        public void onEdge(long tick, int channel, int level) {
-            if (gateOpen || level == UNKNOWN) {
-                sink.onEdge(tick, channel, level);
-            }
-        }
-
-        @Override
-        public void onEnd(long lastTick) {
-            sink.onEnd(lastTick);
-        }
-    }
-
-    /** Notes hellos and acks for the session, then passes every event on. */
-    private final class SessionEvents implements ProbeEvents {
-        @Override
-        public void onHello(Hello h) {
-            if (helloThisConnection == null) {
-                helloThisConnection = h;
-            } else if (gateOpen && sameProbe(h)) {
-                hello = h;
-                ByteTransport t = transport;
-                if (h.atBoot() && t != null) {
-                    // The probe reset while streaming (the decoder has marked the gap): start it again.
-                    sendCaptureCommands(t);
-                }
-            }
-            events.onHello(h);
-        }
-
-        @Override
-        public void onAck(Ack ack) {
-            if (ack.commandType() == Wire.T_START) {
-                startAcked = true;
-            }
-            if (!ack.ok()) {
-                notice = "the probe answered command 0x" + Integer.toHexString(ack.commandType()) + ": "
-                        + ack.statusText();
-            }
-            events.onAck(ack);
-        }
-
-        @Override
-        public void onAdc(int channel, int bits, int fullScaleMv, long firstTick, long periodTicks, int[] samples,
-                int count) {
-            if (gateOpen) {
-                events.onAdc(channel, bits, fullScaleMv, firstTick, periodTicks, samples, count);
-            }
-        }
-
-        @Override
-        public void onNote(String text) {
-            events.onNote(text);
-        }
-
-        @Override
-        public void onProbeTime(long tick) {
-            events.onProbeTime(tick);
-        }
-
-        @Override
-        public void onTrouble(Trouble trouble, long tick) {
-            events.onTrouble(trouble, tick);
-        }
-
-        @Override
-        public void onMode(StreamDecoder.Mode mode) {
-            events.onMode(mode);
         }
     }
 }

@@ -222,4 +222,24 @@ class ProbeSessionTest {
         assertThat(made.calls()).containsExactly("0 0 0", "4 0 1");
         assertThat(made.ended()).isTrue();
     }
+
+    @Test
+    void aProbeThatResetsWhileStreamingIsStartedAgainAfterAGap() throws Exception {
+        Plugs plugs = new Plugs();
+        ProbeEmulator probe = plugIn(plugs, 0x71, true);
+        CollectingSink sink = new CollectingSink();
+        try (ProbeSession session = new ProbeSession(plugs, FAST, sink, new ProbeEvents() { })) {
+            session.start();
+            session.awaitStreaming(Duration.ofSeconds(10));
+            assertThat(probe.awaitStart(10_000)).isTrue();
+            probe.edges(new long[] {1000, 2000}, 1);
+            assertThat(CollectingSink.await(() -> sink.size() == 2)).isTrue();
+            probe.boot(); // a brown-out: the probe comes back stopped, with a boot hello
+            assertThat(CollectingSink.await(() -> probe.starts() == 2)).isTrue();
+            probe.edges(new long[] {70, 90}, 1);
+            assertThat(CollectingSink.await(() -> sink.size() == 5)).isTrue();
+            assertThat(sink.calls()).containsExactly("0 0 1", "1000 0 0", "1000 0 ?", "1000 0 1", "1020 0 0");
+            assertThat(CollectingSink.await(() -> session.counters().probeRestarts() == 1)).isTrue();
+        }
+    }
 }

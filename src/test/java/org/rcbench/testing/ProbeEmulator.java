@@ -25,6 +25,7 @@ public final class ProbeEmulator {
     private final CommandReader commands;
     private final CountDownLatch started = new CountDownLatch(1);
     private volatile boolean running;
+    private final java.util.concurrent.atomic.AtomicInteger starts = new java.util.concurrent.atomic.AtomicInteger();
     private volatile boolean answerHelloRequests = true;
 
     public ProbeEmulator(OutputStream out, long probeId) {
@@ -42,6 +43,7 @@ public final class ProbeEmulator {
 
     /** Resets: a zero, then the boot hello with sequence 0. */
     public synchronized void boot() {
+        running = false;
         io(() -> {
             out.write(0);
             enc.seq(0).hello(hello.withFlags(hello.flags() | Wire.HELLO_AT_BOOT));
@@ -60,6 +62,11 @@ public final class ProbeEmulator {
     /** Waits until the host has sent start. */
     public boolean awaitStart(long millis) throws InterruptedException {
         return started.await(millis, TimeUnit.MILLISECONDS);
+    }
+
+    /** How many start commands arrived. */
+    public int starts() {
+        return starts.get();
     }
 
     public boolean running() {
@@ -108,6 +115,7 @@ public final class ProbeEmulator {
             enc.ack(new Ack(c.type(), seq, Wire.ACK_OK));
             out.flush();
             if (c.type() == Wire.T_START) {
+                starts.incrementAndGet();
                 started.countDown();
             }
         });
