@@ -15,6 +15,7 @@ import picocli.CommandLine.Spec;
             // Each stage registers its command here, one line each.
             MeasureCommand.class,
             BenchCommand.class,
+            PortsCommand.class,
         })
 public final class RcbenchCommand implements Callable<Integer> {
     @Spec
