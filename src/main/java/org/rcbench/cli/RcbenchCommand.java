@@ -13,6 +13,8 @@ import picocli.CommandLine.Spec;
         description = "Measure, predict and diagnose RC timing circuits of the 555 family.",
         subcommands = {
             // Each stage registers its command here, one line each.
+            PredictCommand.class,
+            DesignCommand.class,
         })
 public final class RcbenchCommand implements Callable<Integer> {
     @Spec

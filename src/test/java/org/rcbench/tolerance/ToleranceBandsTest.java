@@ -23,7 +23,7 @@ import org.rcbench.design.PartSpread;
 import org.rcbench.design.Tempco;
 import org.rcbench.units.Tolerance;
 
-class ToleranceTest {
+class ToleranceBandsTest {
     private static final FamilyParameters IDEAL = FamilyParameters.ideal();
 
     private static Design gumCase() {
