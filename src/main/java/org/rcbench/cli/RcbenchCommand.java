@@ -18,6 +18,8 @@ import picocli.CommandLine.Spec;
             PortsCommand.class,
             PredictCommand.class,
             DesignCommand.class,
+            RecordCommand.class,
+            WatchCommand.class,
         })
 public final class RcbenchCommand implements Callable<Integer> {
     @Spec
