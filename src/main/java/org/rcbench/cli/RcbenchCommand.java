@@ -20,6 +20,7 @@ import picocli.CommandLine.Spec;
             DesignCommand.class,
             RecordCommand.class,
             WatchCommand.class,
+            CalibrateCommand.class,
         })
 public final class RcbenchCommand implements Callable<Integer> {
     @Spec
