@@ -153,8 +153,8 @@ public final class RecordCommand implements Callable<Integer> {
     }
 
     private String summary(Tally t, SessionStatus end) {
-        return String.format(Locale.ROOT, "recorded %d edges (%d gaps) over %.3f s of probe time to %s; %s", t.edges,
-                t.gaps, t.seconds(), output, end.counters().summary());
+        return String.format(Locale.ROOT, "recorded %d edges (%d gaps) over %.3f s of probe time to %s (%s)", t.edges,
+                t.gaps, t.seconds(), output, "link: " + end.counters().summary());
     }
 
     /** Counts what reaches the recorder, for the status line (read from the command's thread). */

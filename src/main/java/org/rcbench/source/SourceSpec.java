@@ -1,5 +1,7 @@
 package org.rcbench.source;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.nio.file.Path;
 import java.util.Objects;
 import org.rcbench.design.Design;
@@ -8,6 +10,7 @@ import org.rcbench.sim.Pace;
 import org.rcbench.sim.ProbeOptions;
 import org.rcbench.sim.SimulationSpec;
 import org.rcbench.sim.VirtualBoard;
+import org.rcbench.units.SiFormat;
 
 /** What a {@link LiveSource} reads: a serial probe, a simulated board, or a capture file. Immutable. */
 public sealed interface SourceSpec permits SourceSpec.Port, SourceSpec.Simulated, SourceSpec.CaptureFile {
@@ -66,7 +69,7 @@ public sealed interface SourceSpec permits SourceSpec.Port, SourceSpec.Simulated
 
         /**
          * The simulation in one line, for capture headers: label, deviations, noise, probe clock,
-         * seed, e.g. {@code demo:piper-mk2 C1=-25% jitter=2e-06s clock=16000000Hz+0ppm seed=3}.
+         * seed, e.g. {@code demo:piper-mk2 C1=-25% jitter=2.000µs clock=16000000Hz+0ppm seed=3}.
          */
         public String description() {
             StringBuilder sb = new StringBuilder(label);
@@ -75,18 +78,23 @@ public sealed interface SourceSpec permits SourceSpec.Port, SourceSpec.Simulated
             }
             SimulationSpec s = simulation;
             if (s.jitterSeconds() > 0) {
-                sb.append(" jitter=").append(s.jitterSeconds()).append('s');
+                sb.append(" jitter=").append(SiFormat.format(s.jitterSeconds(), "s", 4).replace(" ", ""));
             }
             if (s.rippleVolts() > 0) {
-                sb.append(" ripple=").append(s.rippleVolts()).append("V@").append(s.rippleHz()).append("Hz");
+                sb.append(" ripple=").append(num(s.rippleVolts())).append("V@").append(num(s.rippleHz())).append("Hz");
             }
             if (s.warmUpFraction() != 0) {
-                sb.append(" warm-up=").append(s.warmUpFraction() * 100).append("%@").append(s.warmUpSeconds()).append('s');
+                sb.append(" warm-up=").append(s.warmUpFraction() > 0 ? "+" : "").append(num(s.warmUpFraction() * 100))
+                        .append("%@").append(num(s.warmUpSeconds())).append('s');
             }
-            sb.append(" clock=").append((long) s.clockHz()).append("Hz")
-                    .append(s.clockOffsetPpm() >= 0 ? "+" : "").append(s.clockOffsetPpm()).append("ppm");
+            sb.append(" clock=").append(num(s.clockHz())).append("Hz")
+                    .append(s.clockOffsetPpm() >= 0 ? "+" : "").append(num(s.clockOffsetPpm())).append("ppm");
             sb.append(" seed=").append(s.seed());
             return sb.toString();
+        }
+
+        private static String num(double v) {
+            return new BigDecimal(v).round(new MathContext(6)).stripTrailingZeros().toPlainString();
         }
 
         @Override

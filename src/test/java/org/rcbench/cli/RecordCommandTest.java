@@ -50,7 +50,7 @@ class RecordCommandTest {
         assertThat(got.edges).isEqualTo(expected);
         assertThat(got.endTick).isEqualTo(limit);
         String text = Files.readString(file);
-        assertThat(text).contains("# simulation=demo:piper-mk2 C1=-25% jitter=1.0E-6s clock=16000000Hz+0.0ppm seed=3")
+        assertThat(text).contains("# simulation=demo:piper-mk2 C1=-25% jitter=1.000µs clock=16000000Hz+0ppm seed=3")
                 .contains("# channel.0=output").contains("# probe_id=72636273696d0001")
                 .contains("# calibration_u_ppm=");
     }
