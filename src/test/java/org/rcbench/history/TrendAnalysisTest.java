@@ -31,7 +31,7 @@ class TrendAnalysisTest {
         assertThat(a.projection().yearsFromLastRun()).isCloseTo(2.0, within(1e-9));
         assertThat(a.projection().crossing()).isBetween(TrendAnalysis.at(T0, 5).minusSeconds(1),
                 TrendAnalysis.at(T0, 5).plusSeconds(1));
-        assertThat(a.projection().text("90 nF")).startsWith("leaves its band (90 nF) around 2024-12") // 5 mean years of 365.2425 days end on 2024-12-31;
+        assertThat(a.projection().text("90 nF")).startsWith("leaves its band (90 nF) around 2024-12"); // 5 mean years of 365.2425 days end on 2024-12-31
     }
 
     @Test
