@@ -76,6 +76,19 @@ public final class CheckDocument {
                 trend(doc.get("trend")));
     }
 
+    /**
+     * The measured quantities of a {@code measure --json} or {@code check --json} document (the rules
+     * above), without requiring a verdict.
+     *
+     * @throws BadInputException when {@code doc} is not a JSON object
+     */
+    public static List<Measured> measurementsOf(JsonNode doc) {
+        if (doc == null || !doc.isObject()) {
+            throw new BadInputException(WHERE, "is not a JSON object");
+        }
+        return measurements(doc);
+    }
+
     static List<Measured> measurements(JsonNode doc) {
         List<Measured> out = new ArrayList<>();
         for (Iterator<Map.Entry<String, JsonNode>> it = doc.fields(); it.hasNext(); ) {

@@ -126,12 +126,12 @@ public record TrendAnalysis(PartTrend trend, int runs, double spanYears, double 
     }
 
     /** Years from {@code from} to {@code to}. */
-    static double years(Instant from, Instant to) {
+    public static double years(Instant from, Instant to) {
         return Duration.between(from, to).toMillis() / 1000.0 / SECONDS_PER_YEAR;
     }
 
     /** The instant {@code years} after {@code from}, clamped to ±10,000 years of it. */
-    static Instant at(Instant from, double years) {
+    public static Instant at(Instant from, double years) {
         double y = Math.max(-1e4, Math.min(1e4, years));
         return from.plusMillis(Math.round(y * SECONDS_PER_YEAR * 1000));
     }
