@@ -77,7 +77,7 @@ public final class CsvWriter implements Closeable, Flushable {
         if (v == Math.rint(v) && Math.abs(v) < 1e15) {
             return Long.toString((long) v);
         }
-        return new BigDecimal(Double.toString(v)).toPlainString();
+        return new BigDecimal(Double.toString(v)).stripTrailingZeros().toPlainString();
     }
 
     @Override

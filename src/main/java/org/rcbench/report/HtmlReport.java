@@ -140,7 +140,7 @@ public final class HtmlReport {
                     .append(range(key, p.map(Predicted::statLow), p.map(Predicted::statHigh))).append("</td><td class=\"n\">")
                     .append(range(key, p.map(Predicted::worstLow), p.map(Predicted::worstHigh))).append("</td><td class=\"status\">")
                     .append(escape(q.map(QuantityCheck::status).orElse("—"))).append("</td></tr>\n");
-            if (p.isPresent() && Double.isFinite(nominal) && nominal != 0) {
+            if (p.isPresent() && Double.isFinite(nominal) && nominal != 0 && Double.isFinite(measured)) {
                 rows.add(new SvgCharts.BandRow(HtmlText.label(key), nominal, p.get().worstLow(), p.get().worstHigh(),
                         p.get().statLow(), p.get().statHigh(), measured, u));
             }
@@ -222,12 +222,12 @@ public final class HtmlReport {
                     .append(escape(HtmlText.value(m.value(), m.unit()))).append("</td><td class=\"n\">")
                     .append(escape(HtmlText.value(m.uncertainty(), m.unit())))
                     .append(String.format(Locale.ROOT, " (k = %.0f)", m.coverage())).append("</td><td class=\"n\">")
-                    .append(m.value() != 0 ? String.format(Locale.ROOT, "%.3g ppm", m.uncertainty() / Math.abs(m.value()) * 1e6) : "—")
+                    .append(m.value() != 0 ? HtmlText.number(m.uncertainty() / Math.abs(m.value()) * 1e6, 3, false) + " ppm" : "—")
                     .append("</td></tr>\n");
         }
         h.append("</tbody>\n</table>\n<p>The probe clock contributes its calibration uncertainty of ")
                 .append(Double.isFinite(probe.clockUncertaintyPpm())
-                        ? String.format(Locale.ROOT, "%.3g ppm (one standard uncertainty)", probe.clockUncertaintyPpm())
+                        ? HtmlText.number(probe.clockUncertaintyPpm(), 3, false) + " ppm (one standard uncertainty)"
                         : "an unstated amount")
                 .append(" to every time and frequency above.</p>\n</section>\n");
     }
@@ -236,13 +236,14 @@ public final class HtmlReport {
         h.append("<section id=\"probe\">\n<h2>Probe and calibration</h2>\n<table>\n<tbody>\n");
         row(h, "Probe", p.probeId() == null ? "not recorded" : escape(p.probeId()));
         row(h, "Firmware", p.firmware() == null ? "not recorded" : escape(p.firmware()));
-        row(h, "Clock offset applied", String.format(Locale.ROOT, "%+.4g ppm", p.clockOffsetPpm()));
+        row(h, "Clock offset applied", HtmlText.number(p.clockOffsetPpm(), 4, true) + " ppm");
         row(h, "Its standard uncertainty", Double.isFinite(p.clockUncertaintyPpm())
-                ? String.format(Locale.ROOT, "%.3g ppm", p.clockUncertaintyPpm()) : "not stated");
+                ? HtmlText.number(p.clockUncertaintyPpm(), 3, false) + " ppm" : "not stated");
         row(h, "Source of the offset", p.calibrationSource() == null ? "not recorded" : escape(p.calibrationSource()));
         if (cal != null) {
-            row(h, "Latest calibration on record", String.format(Locale.ROOT, "%+.4g ppm ± %.3g ppm against %s, %s",
-                    cal.offsetPpm(), cal.uncertaintyPpm(), escape(cal.reference()), WHEN.format(cal.measuredAt())));
+            row(h, "Latest calibration on record", HtmlText.number(cal.offsetPpm(), 4, true) + " ppm ± "
+                    + HtmlText.number(cal.uncertaintyPpm(), 3, false) + " ppm against " + escape(cal.reference()) + ", "
+                    + WHEN.format(cal.measuredAt()));
         } else if (p.probeId() != null) {
             row(h, "Latest calibration on record", "none for this probe");
         }

@@ -95,6 +95,24 @@ final class HtmlText {
         return Double.isFinite(ratio) ? String.format(Locale.ROOT, "%+.1f %%", ratio * 100) : "—";
     }
 
+    /** {@code v} with {@code significant} digits, trailing zeros dropped, optionally signed: {@code +12.5}. */
+    static String number(double v, int significant, boolean signed) {
+        if (!Double.isFinite(v)) {
+            return "—";
+        }
+        String s = String.format(Locale.ROOT, signed ? "%+." + significant + "g" : "%." + significant + "g", v);
+        int e = s.indexOf('e');
+        String mantissa = e < 0 ? s : s.substring(0, e);
+        String exponent = e < 0 ? "" : s.substring(e);
+        if (mantissa.contains(".")) {
+            mantissa = mantissa.replaceAll("0+$", "");
+            if (mantissa.endsWith(".")) {
+                mantissa = mantissa.substring(0, mantissa.length() - 1);
+            }
+        }
+        return mantissa + exponent;
+    }
+
     private static String trimmed(double v) {
         String s = String.format(Locale.ROOT, "%.3f", v);
         s = s.replaceAll("0+$", "");

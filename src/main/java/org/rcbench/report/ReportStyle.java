@@ -32,7 +32,7 @@ final class ReportStyle {
             tr { break-inside: avoid; page-break-inside: avoid; }
             figure { margin: 2mm 0 4mm 0; break-inside: avoid; page-break-inside: avoid; }
             figcaption { font-size: 9pt; margin-top: 1mm; }
-            svg { display: block; width: 100%; height: auto; max-width: 100%; font-size: 11px; }
+            svg { display: block; width: 100%; height: auto; max-width: 100%; font-size: 8pt; }
             svg text { font-family: inherit; }
             pre { white-space: pre-wrap; overflow-wrap: anywhere; font-size: 8.5pt; border: 0.5pt solid #999;
                   padding: 1.5mm; margin: 1mm 0 3mm 0; }

@@ -18,8 +18,8 @@ import org.rcbench.history.TrendAnalysis;
 final class SvgCharts {
     static final int W = 640;
     static final int H = 250;
-    private static final double L = 78;
-    private static final double R = 16;
+    private static final double L = 96;
+    private static final double R = 36;
     private static final double T = 16;
     private static final double B = 46;
     private static final String AXIS = "stroke:#000;stroke-width:1;fill:none";
@@ -151,7 +151,7 @@ final class SvgCharts {
         int rowH = 28;
         int h = (int) (T + rowH * rows.size() + 70);
         Svg svg = new Svg(W, h, "Measured values against predicted bands");
-        double x0 = 150;
+        double x0 = 170;
         double x1 = W - R;
         double mid = (x0 + x1) / 2;
         double scale = (x1 - x0) / 2 / span;
@@ -160,7 +160,7 @@ final class SvgCharts {
         for (double v = Math.ceil(-span / step) * step; v <= span + 1e-12; v += step) {
             double x = mid + v * scale;
             svg.line(x, T - 4, x, axisY, GRID);
-            svg.text(x, axisY + 14, "middle", String.format(Locale.ROOT, "%+.3g %%", v * 100).replace("+0 %", "0 %"));
+            svg.text(x, axisY + 14, "middle", tick(v * 100, step * 100, span * 100, "%"));
         }
         svg.text(mid, axisY + 30, "middle", "deviation from nominal");
         svg.line(mid, T - 4, mid, axisY, "stroke:#000;stroke-width:0.8");
@@ -222,6 +222,33 @@ final class SvgCharts {
         return svg.end();
     }
 
+    private static final String[] PREFIXES = {"p", "n", "µ", "m", "", "k", "M", "G"};
+
+    /**
+     * An axis label for {@code v} on an axis with label step {@code step} whose largest magnitude is
+     * {@code maxAbs}: one SI prefix for the whole axis (from {@code maxAbs}) and just enough decimals
+     * to tell neighbouring labels apart. {@code count} gives whole numbers; {@code %} a signed percent.
+     */
+    static String tick(double v, double step, double maxAbs, String unit) {
+        double value = Math.abs(v) < step * 1e-6 ? 0 : v;
+        if (unit.equals("count")) {
+            return String.format(Locale.ROOT, "%d", Math.round(value));
+        }
+        int exp = 0;
+        String prefix = "";
+        boolean si = !unit.isEmpty() && !unit.equals("1") && !unit.equals("%");
+        if (si && maxAbs > 0) {
+            exp = (int) Math.floor(Math.log10(maxAbs) / 3) * 3;
+            exp = Math.max(-12, Math.min(9, exp));
+            prefix = PREFIXES[exp / 3 + 4];
+        }
+        double scale = Math.pow(10, exp);
+        int decimals = (int) Math.max(0, Math.ceil(-Math.log10(step / scale) - 1e-9));
+        String number = String.format(Locale.ROOT, (unit.equals("%") && value != 0 ? "%+." : "%.") + decimals + "f",
+                value / scale);
+        return unit.isEmpty() || unit.equals("1") ? number : number + " " + prefix + unit;
+    }
+
     /** The step between axis labels: 1, 2 or 5 times a power of ten, giving about {@code ticks} labels over {@code range}. */
     static double niceStep(double range, int ticks) {
         double raw = range / ticks;
@@ -257,7 +284,7 @@ final class SvgCharts {
             double sx = niceStep(x1 - x0, 6);
             for (double v = Math.ceil(x0 / sx) * sx; v <= x1 + sx * 1e-9; v += sx) {
                 svg.line(x(v), T, x(v), H - B, GRID);
-                svg.text(x(v), H - B + 14, "middle", HtmlText.value(Math.abs(v) < sx * 1e-9 ? 0 : v, xUnit));
+                svg.text(x(v), H - B + 14, "middle", tick(v, sx, Math.max(Math.abs(x0), Math.abs(x1)), xUnit));
             }
             svg.text((L + W - R) / 2, H - 8, "middle", xLabel);
             drawValueAxis(svg, yUnit.equals("cycles") ? "count" : yUnit, yUnit);
@@ -268,9 +295,9 @@ final class SvgCharts {
             double sy = niceStep(y1 - y0, 5);
             for (double v = Math.ceil(y0 / sy) * sy; v <= y1 + sy * 1e-9; v += sy) {
                 svg.line(L, y(v), W - R, y(v), GRID);
-                svg.text(L - 4, y(v) + 4, "end", HtmlText.value(Math.abs(v) < sy * 1e-9 ? 0 : v, unit));
+                svg.text(L - 5, y(v) + 4, "end", tick(v, sy, Math.max(Math.abs(y0), Math.abs(y1)), unit));
             }
-            svg.raw("<text x=\"12\" y=\"" + Svg.n((T + H - B) / 2) + "\" text-anchor=\"middle\" transform=\"rotate(-90 12 "
+            svg.raw("<text x=\"10\" y=\"" + Svg.n((T + H - B) / 2) + "\" text-anchor=\"middle\" transform=\"rotate(-90 10 "
                     + Svg.n((T + H - B) / 2) + ")\">" + HtmlText.escape(label) + "</text>");
         }
 
