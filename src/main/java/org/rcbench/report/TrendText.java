@@ -32,7 +32,12 @@ public final class TrendText {
                 if (Double.isFinite(a.relativeSlopePerYear())) {
                     sb.append(", ").append(HtmlText.signedPercent(a.relativeSlopePerYear())).append(" a year");
                 }
-                sb.append(String.format(Locale.ROOT, ", p = %.2g", a.slopePValue())).append(')');
+                if (a.slopePValue() < 0.001) {
+                    sb.append(", p < 0.001");
+                } else if (Double.isFinite(a.slopePValue())) {
+                    sb.append(String.format(Locale.ROOT, ", p = %.2g", a.slopePValue()));
+                }
+                sb.append(')');
             }
         }
         Projection p = a.projection();
