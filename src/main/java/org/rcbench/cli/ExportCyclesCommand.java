@@ -40,7 +40,8 @@ public final class ExportCyclesCommand implements Callable<Integer> {
             CaptureChannel.warn(c, err);
             if (!OutputFile.isStdout(output)) {
                 err.println("rcbench: " + summary[0].cycles() + " cycles of channel " + ch + " written to " + output
-                        + (summary[0].gaps() > 0 ? " (" + summary[0].gaps() + " gaps: no cycle spans them)" : ""));
+                        + (summary[0].gaps() == 1 ? " (1 gap: no cycle spans it)"
+                                : summary[0].gaps() > 1 ? " (" + summary[0].gaps() + " gaps: no cycle spans them)" : ""));
             }
         }
         err.flush();
