@@ -155,7 +155,8 @@ public final class HistoryCommand implements Callable<Integer> {
             x.put("part", t.part());
             x.put("unit", t.unit());
             num(x, "nominal", t.nominal());
-            num(x, "tolerance", t.tolerance());
+            num(x, "tolerance_minus", t.tolerance() == null ? Double.NaN : t.tolerance().minusFraction());
+            num(x, "tolerance_plus", t.tolerance() == null ? Double.NaN : t.tolerance().plusFraction());
             x.put("runs", a.runs());
             num(x, "span_years", a.spanYears());
             num(x, "slope_per_year", a.slopePerYear());

@@ -4,6 +4,7 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
+import org.rcbench.units.Tolerance;
 
 /**
  * The parts of a check result the history keeps as rows: verdict, measurements with uncertainties,
@@ -50,6 +51,12 @@ public record CheckContent(String verdict, List<Measured> measurements, List<Pre
     /** The prediction of {@code quantity} (a prediction key such as {@code frequency_hz}). */
     public Optional<Predicted> prediction(String quantity) {
         return predictions.stream().filter(p -> p.quantity().equals(quantity)).findFirst();
+    }
+
+    /** The same content with these estimates. */
+    public CheckContent withEstimates(List<Estimate> e) {
+        return new CheckContent(verdict, measurements, predictions, oscillates, reason, checks, e, suspects,
+                ambiguities, histogram, trend);
     }
 
     /** The same content with the given plot data (for a check document that carried none). */
@@ -116,11 +123,11 @@ public record CheckContent(String verdict, List<Measured> measurements, List<Pre
      * @param nominal   the design's value
      * @param low       low end of the estimate's interval
      * @param high      high end of the estimate's interval
-     * @param tolerance the part's relative tolerance (0.05 for ±5 %), or NaN when the document does
-     *                  not give it
+     * @param tolerance the part's tolerance band (from the document, else from the design), or null
+     *                  when neither gives one
      */
     public record Estimate(String part, double value, String unit, double nominal, double low, double high,
-            double tolerance) {
+            Tolerance tolerance) {
         public Estimate {
             Objects.requireNonNull(part, "part");
             Objects.requireNonNull(unit, "unit");

@@ -15,6 +15,7 @@ import org.rcbench.history.CheckContent.PeriodHistogram;
 import org.rcbench.history.CheckContent.Predicted;
 import org.rcbench.history.CheckContent.QuantityCheck;
 import org.rcbench.history.CheckContent.Suspect;
+import org.rcbench.units.Tolerance;
 
 /**
  * Reads the rows the history keeps from a check result document ({@code rcbench check --json}).
@@ -29,7 +30,8 @@ import org.rcbench.history.CheckContent.Suspect;
  * (object by quantity or array with {@code quantity}) with {@code measured}, {@code band}
  * ({@code [low, high]} or {@code {low, high}}) and {@code status}; {@code estimates} (object by
  * designator or array with {@code part}) with {@code value}, {@code unit}, {@code nominal},
- * {@code low}, {@code high} and optionally {@code tolerance} (a fraction) or {@code tolerance_pct};
+ * {@code low}, {@code high} and optionally {@code tolerance} (a fraction or a text such as
+ * {@code "+50/-20%"}), {@code tolerance_pct}, or {@code tolerance_minus} and {@code tolerance_plus};
  * {@code suspects} (array, in rank order) with {@code part}, {@code value}, {@code nominal},
  * {@code deviation}, {@code probability}; {@code ambiguities} (strings); and the plot data
  * {@code histogram} {@code {edges_s, counts}} and {@code trend} {@code [{t_s, frequency_hz}]}.
@@ -208,15 +210,41 @@ public final class CheckDocument {
         List<Estimate> out = new ArrayList<>();
         for (Map.Entry<String, JsonNode> e : entries(estimates, "estimates", "part")) {
             JsonNode x = e.getValue();
-            double tol = number(x, "tolerance");
-            if (Double.isNaN(tol)) {
-                tol = number(x, "tolerance_pct") / 100;
-            }
+            Tolerance tol = tolerance(x, e.getKey());
             String unit = text(x, "unit");
             out.add(new Estimate(e.getKey(), number(x, "value"), unit == null ? "" : unit, number(x, "nominal"),
                     number(x, "low"), number(x, "high"), tol));
         }
         return out;
+    }
+
+    /**
+     * The tolerance an estimate states: {@code tolerance} as a fraction (0.05) or as text ({@code "5%"},
+     * {@code "+50/-20%"}), {@code tolerance_pct}, or {@code tolerance_minus} with {@code tolerance_plus}
+     * (fractions); null when none is given.
+     */
+    private static Tolerance tolerance(JsonNode x, String part) {
+        try {
+            JsonNode t = x.get("tolerance");
+            if (t != null && t.isNumber()) {
+                return Tolerance.symmetric(t.doubleValue());
+            }
+            if (t != null && t.isTextual()) {
+                return Tolerance.parse(t.asText());
+            }
+            double pct = number(x, "tolerance_pct");
+            if (!Double.isNaN(pct)) {
+                return Tolerance.symmetric(pct / 100);
+            }
+            double minus = number(x, "tolerance_minus");
+            double plus = number(x, "tolerance_plus");
+            if (!Double.isNaN(minus) && !Double.isNaN(plus)) {
+                return new Tolerance(minus, plus);
+            }
+            return null;
+        } catch (IllegalArgumentException | BadInputException e) {
+            throw new BadInputException(WHERE, "estimates." + part + ": bad tolerance (" + e.getMessage() + ")", e);
+        }
     }
 
     private static List<Suspect> suspects(JsonNode suspects) {

@@ -3,6 +3,7 @@ package org.rcbench.history;
 import java.time.Instant;
 import java.util.List;
 import java.util.Objects;
+import org.rcbench.units.Tolerance;
 
 /**
  * The estimated value of one part of one unit over its runs, oldest first.
@@ -12,10 +13,10 @@ import java.util.Objects;
  * @param part      designator, e.g. {@code C1}
  * @param unit      the estimates' unit, e.g. {@code F}
  * @param nominal   the design value (from the latest run)
- * @param tolerance relative tolerance of the part (0.05 for ±5 %) from the latest run, or NaN when unknown
+ * @param tolerance the part's tolerance band from the latest run, or null when unknown
  * @param points    one estimate per run, in time order
  */
-public record PartTrend(String board, String serial, String part, String unit, double nominal, double tolerance,
+public record PartTrend(String board, String serial, String part, String unit, double nominal, Tolerance tolerance,
         List<Point> points) {
 
     public PartTrend {

@@ -9,7 +9,7 @@ import java.util.Locale;
  * When a part is projected to leave its tolerance band, or why no date is given.
  *
  * @param kind                 the outcome
- * @param edge                 the band edge concerned ({@code nominal * (1 ± tolerance)}), or NaN
+ * @param edge                 the band edge concerned (an end of the tolerance band), or NaN
  * @param crossing             the fitted line's crossing, or null
  * @param earliest             early end of the 95 % range of the crossing, or null
  * @param latest               late end of that range, or null

@@ -17,6 +17,7 @@ import org.rcbench.history.CheckContent.PeriodHistogram;
 import org.rcbench.history.CheckContent.Predicted;
 import org.rcbench.history.CheckContent.QuantityCheck;
 import org.rcbench.history.CheckContent.Suspect;
+import org.rcbench.units.Tolerance;
 
 /** Reads runs and their rows back. Stateless; the caller serialises use of the connection. */
 final class RunReader {
@@ -91,7 +92,7 @@ final class RunReader {
      * points in time order. The nominal and tolerance are the latest run's.
      */
     static List<PartTrend> trends(Connection c, String boardOrSerial) throws SQLException {
-        String sql = "SELECT r.board, r.serial, e.part, e.unit, e.value, e.low, e.high, e.nominal, e.tolerance,"
+        String sql = "SELECT r.board, r.serial, e.part, e.unit, e.value, e.low, e.high, e.nominal, e.tol_minus, e.tol_plus,"
                 + " r.id, r.recorded_utc FROM estimate e JOIN run r ON r.id = e.run_id" + MATCH
                 + " ORDER BY r.board COLLATE NOCASE, r.serial, e.part, r.recorded_utc, r.id";
         List<PartTrend> out = new ArrayList<>();
@@ -103,7 +104,7 @@ final class RunReader {
                 String part = null;
                 String unit = null;
                 double nominal = Double.NaN;
-                double tolerance = Double.NaN;
+                Tolerance tolerance = null;
                 List<PartTrend.Point> points = new ArrayList<>();
                 while (rs.next()) {
                     String b = rs.getString(1);
@@ -119,8 +120,8 @@ final class RunReader {
                     part = p;
                     unit = rs.getString(4);
                     nominal = real(rs, "nominal");
-                    tolerance = real(rs, "tolerance");
-                    points.add(new PartTrend.Point(rs.getLong(10), UtcText.parse(rs.getString(11)), real(rs, "value"),
+                    tolerance = tolerance(rs);
+                    points.add(new PartTrend.Point(rs.getLong(11), UtcText.parse(rs.getString(12)), real(rs, "value"),
                             real(rs, "low"), real(rs, "high")));
                 }
                 if (part != null) {
@@ -158,7 +159,7 @@ final class RunReader {
     private static List<Estimate> estimates(Connection c, long id) throws SQLException {
         return list(c, "SELECT * FROM estimate WHERE run_id = ? ORDER BY seq", id,
                 rs -> new Estimate(rs.getString("part"), real(rs, "value"), rs.getString("unit"),
-                        real(rs, "nominal"), real(rs, "low"), real(rs, "high"), real(rs, "tolerance")));
+                        real(rs, "nominal"), real(rs, "low"), real(rs, "high"), tolerance(rs)));
     }
 
     private static List<Suspect> suspects(Connection c, long id) throws SQLException {
@@ -222,6 +223,13 @@ final class RunReader {
         } catch (JsonProcessingException e) {
             throw new IllegalStateException("stored JSON does not parse: " + e.getOriginalMessage(), e);
         }
+    }
+
+    /** The estimate row's tolerance, null when not stored. */
+    static Tolerance tolerance(ResultSet rs) throws SQLException {
+        double minus = real(rs, "tol_minus");
+        double plus = real(rs, "tol_plus");
+        return Double.isNaN(minus) || Double.isNaN(plus) ? null : new Tolerance(minus, plus);
     }
 
     /** A nullable REAL column as a double, NaN for NULL. */

@@ -25,13 +25,15 @@ public record RunRecord(long id, RunContext context, CheckContent content, JsonN
     }
 
     /**
-     * A run to save from a check document ({@code rcbench check --json}) and its context.
+     * A run to save from a check document ({@code rcbench check --json}) and its context. A part
+     * tolerance the document does not state is taken from the context's design text.
      *
      * @throws org.rcbench.common.BadInputException when the document has no verdict or a known key
      *                                              has the wrong shape (see {@link CheckDocument})
      */
     public static RunRecord of(JsonNode checkDocument, RunContext context) {
-        return new RunRecord(0, context, CheckDocument.parse(checkDocument), checkDocument);
+        CheckContent content = DesignTolerances.fill(CheckDocument.parse(checkDocument), context.design());
+        return new RunRecord(0, context, content, checkDocument);
     }
 
     @Override

@@ -148,7 +148,7 @@ final class RunWriter {
 
     private static void estimates(Connection c, long id, List<Estimate> rows) throws SQLException {
         try (PreparedStatement s = c.prepareStatement("INSERT OR REPLACE INTO estimate (run_id, seq, part, value,"
-                + " unit, nominal, low, high, tolerance) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)")) {
+                + " unit, nominal, low, high, tol_minus, tol_plus) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")) {
             for (int j = 0; j < rows.size(); j++) {
                 Estimate e = rows.get(j);
                 s.setLong(1, id);
@@ -159,7 +159,8 @@ final class RunWriter {
                 real(s, 6, e.nominal());
                 real(s, 7, e.low());
                 real(s, 8, e.high());
-                real(s, 9, e.tolerance());
+                real(s, 9, e.tolerance() == null ? Double.NaN : e.tolerance().minusFraction());
+                real(s, 10, e.tolerance() == null ? Double.NaN : e.tolerance().plusFraction());
                 s.addBatch();
             }
             s.executeBatch();

@@ -49,7 +49,7 @@ final class Schema {
                             + " band_high REAL, status TEXT NOT NULL, PRIMARY KEY (run_id, quantity))",
                     "CREATE TABLE estimate (run_id INTEGER NOT NULL REFERENCES run(id) ON DELETE CASCADE,"
                             + " seq INTEGER NOT NULL, part TEXT NOT NULL, value REAL, unit TEXT NOT NULL, nominal REAL,"
-                            + " low REAL, high REAL, tolerance REAL, PRIMARY KEY (run_id, part))",
+                            + " low REAL, high REAL, tol_minus REAL, tol_plus REAL, PRIMARY KEY (run_id, part))",
                     "CREATE INDEX estimate_part ON estimate (part)",
                     "CREATE TABLE suspect (run_id INTEGER NOT NULL REFERENCES run(id) ON DELETE CASCADE,"
                             + " rank INTEGER NOT NULL, part TEXT NOT NULL, value REAL, nominal REAL, deviation REAL,"

@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.apache.commons.math3.distribution.TDistribution;
 import org.apache.commons.math3.stat.regression.SimpleRegression;
+import org.rcbench.units.Tolerance;
 
 /**
  * A part's drift over a unit's runs: the least-squares line of estimated value against time and
@@ -14,7 +15,8 @@ import org.apache.commons.math3.stat.regression.SimpleRegression;
  * <p>The line is an ordinary least-squares fit ({@link SimpleRegression}, Commons Math) of value
  * against years since the first run (a year is 365.2425 days). The slope's standard error and its
  * two-sided p-value against zero come from the same fit (Student t with n - 2 degrees of freedom).
- * The band is {@code nominal * (1 ± tolerance)}.
+ * The band is the part's tolerance band around nominal ({@code nominal * (1 - minus)} to
+ * {@code nominal * (1 + plus)}).
  *
  * <p>Projection: none from fewer than {@value #MIN_RUNS} runs, none when the slope is not
  * significantly different from zero at the 5 % level, "already outside" when the latest estimate or
@@ -83,13 +85,13 @@ public record TrendAnalysis(PartTrend trend, int runs, double spanYears, double 
 
     private static Projection project(PartTrend trend, List<PartTrend.Point> pts, SimpleRegression fit, double xMean,
             double xLast, Instant first, Instant last, double horizon) {
-        double tol = trend.tolerance();
+        Tolerance tol = trend.tolerance();
         double nominal = trend.nominal();
-        if (!(tol > 0) || !Double.isFinite(nominal)) {
+        if (tol == null || tol.equals(Tolerance.NONE) || !Double.isFinite(nominal)) {
             return Projection.none(Projection.Kind.NO_TOLERANCE, horizon);
         }
-        double lowEdge = nominal * (1 - tol);
-        double highEdge = nominal * (1 + tol);
+        double lowEdge = tol.low(nominal);
+        double highEdge = tol.high(nominal);
         double latest = pts.get(pts.size() - 1).value();
         if (latest < Math.min(lowEdge, highEdge) || latest > Math.max(lowEdge, highEdge)) {
             return Projection.outside(latest < Math.min(lowEdge, highEdge) ? lowEdge : highEdge, horizon);

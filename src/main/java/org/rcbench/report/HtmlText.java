@@ -2,6 +2,7 @@ package org.rcbench.report;
 
 import java.util.Locale;
 import org.rcbench.units.SiFormat;
+import org.rcbench.units.Tolerance;
 
 /** Escaping and number wording for the report. Stateless and thread-safe. */
 final class HtmlText {
@@ -85,9 +86,15 @@ final class HtmlText {
         };
     }
 
-    /** {@code 0.05} as {@code ±5 %}. */
-    static String tolerance(double t) {
-        return Double.isFinite(t) ? "±" + trimmed(t * 100) + " %" : "—";
+    /** A tolerance band as {@code ±5 %} or {@code +50/-20 %}; {@code —} when unknown. */
+    static String tolerance(Tolerance t) {
+        if (t == null) {
+            return "—";
+        }
+        if (t.isSymmetric()) {
+            return "±" + trimmed(t.plusFraction() * 100) + " %";
+        }
+        return "+" + trimmed(t.plusFraction() * 100) + "/-" + trimmed(t.minusFraction() * 100) + " %";
     }
 
     /** {@code -0.052} as {@code -5.2 %}. */

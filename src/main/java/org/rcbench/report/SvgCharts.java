@@ -9,6 +9,7 @@ import org.rcbench.history.CheckContent.FrequencyPoint;
 import org.rcbench.history.CheckContent.PeriodHistogram;
 import org.rcbench.history.PartTrend;
 import org.rcbench.history.TrendAnalysis;
+import org.rcbench.units.Tolerance;
 
 /**
  * The report's plots as SVG text, drawn in black and greys with dash patterns and marker shapes so
@@ -91,10 +92,10 @@ final class SvgCharts {
                 }
             }
         }
-        boolean band = t.tolerance() > 0 && Double.isFinite(t.nominal());
+        boolean band = t.tolerance() != null && !t.tolerance().equals(Tolerance.NONE) && Double.isFinite(t.nominal());
         if (band) {
-            y0 = Math.min(y0, t.nominal() * (1 - t.tolerance()));
-            y1 = Math.max(y1, t.nominal() * (1 + t.tolerance()));
+            y0 = Math.min(y0, t.tolerance().low(t.nominal()));
+            y1 = Math.max(y1, t.tolerance().high(t.nominal()));
         }
         double pad = Math.max((y1 - y0) * 0.08, Math.abs(y1) * 1e-6);
         Svg svg = new Svg(W, H, "Estimated " + t.part() + " over the runs");
@@ -102,8 +103,8 @@ final class SvgCharts {
         ax.drawValueAxis(svg, t.unit(), t.part() + " (" + t.unit() + ")");
         ax.dateAxis(svg, first, span);
         if (band) {
-            double yl = ax.y(t.nominal() * (1 - t.tolerance()));
-            double yh = ax.y(t.nominal() * (1 + t.tolerance()));
+            double yl = ax.y(t.tolerance().low(t.nominal()));
+            double yh = ax.y(t.tolerance().high(t.nominal()));
             svg.rect(L, yh, W - L - R, yl - yh, "fill:#eee;stroke:none");
             svg.line(L, yl, W - R, yl, "stroke:#000;stroke-width:0.8;stroke-dasharray:6,3");
             svg.line(L, yh, W - R, yh, "stroke:#000;stroke-width:0.8;stroke-dasharray:6,3");

@@ -18,7 +18,7 @@ public final class TrendText {
         PartTrend t = a.trend();
         StringBuilder sb = new StringBuilder();
         sb.append(t.part()).append(" (nominal ").append(HtmlText.value(t.nominal(), t.unit()));
-        if (t.tolerance() > 0) {
+        if (t.tolerance() != null) {
             sb.append(' ').append(HtmlText.tolerance(t.tolerance()));
         }
         sb.append("): ").append(a.runs()).append(a.runs() == 1 ? " run" : " runs");

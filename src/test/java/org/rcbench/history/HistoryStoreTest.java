@@ -17,6 +17,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.rcbench.common.BadInputException;
 import org.rcbench.history.CheckContent.Estimate;
 import org.rcbench.history.CheckContent.Measured;
+import org.rcbench.units.Tolerance;
 
 class HistoryStoreTest {
     private static final Instant T0 = Instant.parse("2024-05-01T08:00:00Z");
@@ -64,7 +65,7 @@ class HistoryStoreTest {
         assertThat(c.measurement("frequency_u_hz")).isEmpty();
         assertThat(c.measurement("channel")).isEmpty();
         assertThat(c.measurement("tie_rms_s").orElseThrow().uncertainty()).isNaN();
-        assertThat(c.estimates()).extracting(Estimate::tolerance).containsExactly(0.1, 0.01);
+        assertThat(c.estimates()).extracting(Estimate::tolerance).containsExactly(Tolerance.symmetric(0.1), Tolerance.symmetric(0.01));
     }
 
     @Test
@@ -109,7 +110,7 @@ class HistoryStoreTest {
             PartTrend c1 = trends.get(0);
             assertThat(c1.points()).extracting(PartTrend.Point::value).containsExactly(1.0e-7, 9.6e-8);
             assertThat(c1.nominal()).isEqualTo(1e-7);
-            assertThat(c1.tolerance()).isEqualTo(0.1);
+            assertThat(c1.tolerance()).isEqualTo(Tolerance.symmetric(0.1));
             assertThat(c1.unit()).isEqualTo("F");
             assertThat(store.partTrends("TestBoard-A")).hasSize(4);
             assertThat(store.partTrend("TestBoard-A", "SN-2", "C1").orElseThrow().points()).hasSize(1);
@@ -200,5 +201,48 @@ class HistoryStoreTest {
         assertThatThrownBy(() -> RunRecord.of(doc, Fixtures.context("SN-1", T0)))
                 .isInstanceOf(BadInputException.class)
                 .hasMessage("check result: verdict must be one of pass, marginal, fail, stopped, found none");
+    }
+
+    /** A design of our own test board (not demo data): an astable with asymmetric C1 tolerance. */
+    static final String DESIGN = """
+            rcbench_design = 1
+
+            [board]
+            name = "TestBoard-A"
+
+            [timer]
+            topology = "astable"
+            family = "bipolar"
+            supply = "5 V"
+
+            [parts.R1]
+            role = "charge"
+            value = "2k2"
+            tolerance = "1%"
+
+            [parts.R2]
+            role = "shared"
+            value = "10k"
+            tolerance = "2%"
+
+            [parts.C1]
+            role = "timing"
+            value = "100n"
+            tolerance = "+50/-20%"
+            """;
+
+    @Test
+    void tolerancesTheDocumentLeavesOutComeFromTheRunsDesign() {
+        var doc = Fixtures.check();
+        ((com.fasterxml.jackson.databind.node.ObjectNode) doc.path("estimates").path("C1")).remove("tolerance");
+        ((com.fasterxml.jackson.databind.node.ObjectNode) doc.path("estimates").path("R2")).remove("tolerance_pct");
+        ((com.fasterxml.jackson.databind.node.ObjectNode) doc.path("estimates").path("R2")).put("tolerance", "+3/-1%");
+        RunRecord r = RunRecord.of(doc, RunContext.of("TestBoard-A", DesignRef.of("a.toml", DESIGN)));
+        // C1 from the design's "+50/-20%"; R2 as the document states it (text), not the design's 2 %.
+        assertThat(r.content().estimates()).extracting(Estimate::tolerance)
+                .containsExactly(new Tolerance(0.2, 0.5), new Tolerance(0.01, 0.03));
+        // A design text that does not parse leaves it unknown.
+        RunRecord old = RunRecord.of(doc, Fixtures.context("SN-1", T0));
+        assertThat(old.content().estimates().get(0).tolerance()).isNull();
     }
 }

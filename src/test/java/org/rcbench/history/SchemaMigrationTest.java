@@ -42,7 +42,7 @@ class SchemaMigrationTest {
                 p.executeUpdate();
             }
             s.executeUpdate("INSERT INTO measurement VALUES (1, 0, 'frequency_hz', 1000.0, 0.04, 2, 'Hz')");
-            s.executeUpdate("INSERT INTO estimate VALUES (1, 0, 'C1', 9.5e-8, 'F', 1e-7, 9.3e-8, 9.7e-8, 0.1)");
+            s.executeUpdate("INSERT INTO estimate VALUES (1, 0, 'C1', 9.5e-8, 'F', 1e-7, 9.3e-8, 9.7e-8, 0.1, 0.1)");
             s.executeUpdate("INSERT INTO suspect VALUES (1, 1, 'C1', 9.5e-8, 1e-7, -0.05, 0.81)");
             try (ResultSet rs = s.executeQuery("SELECT count(*) FROM pragma_table_info('run') WHERE name = 'note'")) {
                 assertThat(rs.getInt(1)).isZero(); // version 1 really has no note column

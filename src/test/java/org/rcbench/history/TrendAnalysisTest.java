@@ -7,6 +7,7 @@ import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.rcbench.units.Tolerance;
 
 class TrendAnalysisTest {
     private static final Instant T0 = Instant.parse("2020-01-01T00:00:00Z");
@@ -17,7 +18,7 @@ class TrendAnalysisTest {
         for (int i = 0; i < values.length; i++) {
             pts.add(new PartTrend.Point(i + 1, TrendAnalysis.at(T0, i), values[i], Double.NaN, Double.NaN));
         }
-        return new PartTrend("B", "SN", "C1", "nF", 100, tolerance, pts);
+        return new PartTrend("B", "SN", "C1", "nF", 100, Double.isNaN(tolerance) ? null : Tolerance.symmetric(tolerance), pts);
     }
 
     @Test
@@ -117,6 +118,18 @@ class TrendAnalysisTest {
         TrendAnalysis a = trend(0.10, 100, 99.9, 99.8, 99.7).analyse(10);
         assertThat(a.projection().kind()).isEqualTo(Projection.Kind.NOT_WITHIN_HORIZON);
         assertThat(a.projection().text("90 nF")).isEqualTo("not projected to leave its band within the next 10 years");
+    }
+
+    @Test
+    void anAsymmetricBandIsLeftAtTheEdgeTheDriftHeadsFor() {
+        // +50/-20 % around 100: the low edge is 80; -4 a year from 100 reaches it at year 5.
+        List<PartTrend.Point> pts = new ArrayList<>();
+        for (int i = 0; i < 4; i++) {
+            pts.add(new PartTrend.Point(i + 1, TrendAnalysis.at(T0, i), 100 - 4.0 * i, Double.NaN, Double.NaN));
+        }
+        Projection p = new PartTrend("B", "SN", "C9", "uF", 100, new Tolerance(0.2, 0.5), pts).analyse(10).projection();
+        assertThat(p.edge()).isCloseTo(80, within(1e-12));
+        assertThat(p.yearsFromLastRun()).isCloseTo(2.0, within(1e-9));
     }
 
     @Test

@@ -21,6 +21,7 @@ import org.rcbench.history.PartTrend;
 import org.rcbench.history.ProbeCalibration;
 import org.rcbench.history.RunRecord;
 import org.rcbench.history.TrendAnalysis;
+import org.rcbench.units.Tolerance;
 
 /** The report's content (shape fixture: values are only checked to appear as stored) and its validity. */
 class HtmlReportTest {
@@ -34,7 +35,7 @@ class HtmlReportTest {
             pts.add(new PartTrend.Point(i + 1, TrendAnalysis.at(T0, i - 3.0), 1e-7 * (1 - 0.02 * i), 0.98e-7 * (1 - 0.02 * i),
                     1.02e-7 * (1 - 0.02 * i)));
         }
-        TrendAnalysis a = new PartTrend("TestBoard-A", "SN-1", "C1", "F", 1e-7, 0.1, pts).analyse(10);
+        TrendAnalysis a = new PartTrend("TestBoard-A", "SN-1", "C1", "F", 1e-7, Tolerance.symmetric(0.1), pts).analyse(10);
         ProbeCalibration cal = ProbeCalibration.of("probe-7", 12.0, 1.5, "1 Hz reference", T0.minusSeconds(86400));
         return new ReportInput(run, List.of(a), cal, T0.plusSeconds(60), "rcbench test");
     }
