@@ -41,7 +41,7 @@ public final class ExportMeasurementsCommand implements Callable<Integer> {
     boolean last;
 
     @Option(names = "--from-json", paramLabel = "FILE",
-            description = "Read the output of rcbench measure --json or check --json instead of the history.")
+            description = "Read the output of rcbench measure --json or check --json (- for stdin) instead of the history.")
     Path fromJson;
 
     @Option(names = {"-o", "--output"}, paramLabel = "FILE", description = "Write to FILE instead of stdout.")
@@ -78,14 +78,16 @@ public final class ExportMeasurementsCommand implements Callable<Integer> {
     private static JsonNode read(Path file) throws java.io.IOException {
         String text;
         try {
-            text = Files.readString(file, StandardCharsets.UTF_8);
+            text = file.toString().equals("-") ? new String(System.in.readAllBytes(), StandardCharsets.UTF_8)
+                    : Files.readString(file, StandardCharsets.UTF_8);
         } catch (NoSuchFileException e) {
             throw new BadInputException(file.toString(), "no such file", e);
         }
         try {
             return new ObjectMapper().readTree(text);
         } catch (JsonProcessingException e) {
-            throw new BadInputException(file + ":" + e.getLocation().getLineNr(), "not JSON: " + e.getOriginalMessage(), e);
+            String where = file.toString().equals("-") ? "stdin" : file.toString();
+            throw new BadInputException(where + ":" + e.getLocation().getLineNr(), "not JSON: " + e.getOriginalMessage(), e);
         }
     }
 }

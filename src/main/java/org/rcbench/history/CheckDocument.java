@@ -46,7 +46,8 @@ public final class CheckDocument {
     public static final int MAX_TREND_POINTS = 500;
 
     private static final String WHERE = "check result";
-    private static final Set<String> NOT_MEASUREMENTS = Set.of("channel", "verdict", "coverage_factor");
+    private static final Set<String> NOT_MEASUREMENTS = Set.of("channel", "verdict", "coverage_factor", "clock_hz",
+            "clock_offset_ppm");
     private static final Set<String> COUNTS = Set.of("cycles", "glitches", "gaps", "settling_cycles", "edges",
             "stalls", "missed_edges", "segments", "mtie_resolution_cycles");
 

@@ -12,6 +12,8 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
 import org.junit.jupiter.api.Test;
@@ -101,6 +103,31 @@ class ExportCommandTest {
         assertThat(f.values()).containsExactly("frequency_hz", "1000", "0.04", "Hz", "2");
         CSVRecord tie = rows.stream().filter(r -> r.get("quantity").equals("tie_rms_s")).findFirst().orElseThrow();
         assertThat(tie.values()).containsExactly("tie_rms_s", "0.000003", "", "s", "");
+    }
+
+    @Test
+    void measurementsOfACaptureThroughMeasureJsonOnStdin() throws Exception {
+        CliRun measure = CliRun.of("measure", capture().toString(), "--json");
+        assertThat(measure.exitCode()).as(measure.err()).isZero();
+        JsonNode m = new ObjectMapper().readTree(measure.out());
+        java.io.InputStream stdin = System.in;
+        CliRun export;
+        try {
+            System.setIn(new java.io.ByteArrayInputStream(measure.out().getBytes(StandardCharsets.UTF_8)));
+            export = CliRun.of("export", "measurements", "--from-json", "-");
+        } finally {
+            System.setIn(stdin);
+        }
+        assertThat(export.exitCode()).as(export.err()).isZero();
+        List<CSVRecord> rows = csv(export.out());
+        CSVRecord f = rows.stream().filter(r -> r.get("quantity").equals("frequency_hz")).findFirst().orElseThrow();
+        assertThat(Double.parseDouble(f.get("value"))).isEqualTo(m.path("frequency_hz").asDouble());
+        assertThat(Double.parseDouble(f.get("uncertainty"))).isEqualTo(m.path("frequency_u_hz").asDouble());
+        CSVRecord high = rows.stream().filter(r -> r.get("quantity").equals("high_s")).findFirst().orElseThrow();
+        // the measure document's standard uncertainty high.u_s, expanded with k = 2
+        assertThat(Double.parseDouble(high.get("uncertainty"))).isEqualTo(2 * m.path("high").path("u_s").asDouble());
+        assertThat(high.get("unit")).isEqualTo("s");
+        assertThat(rows).noneMatch(r -> r.get("quantity").equals("frequency_u_hz") || r.get("quantity").equals("channel"));
     }
 
     @Test
