@@ -1,5 +1,6 @@
 package org.rcbench.cli;
 
+import java.io.BufferedOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.io.OutputStreamWriter;
@@ -10,6 +11,7 @@ import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
 import org.rcbench.common.BadInputException;
 
 /**
@@ -60,9 +62,12 @@ final class OutputFile {
         if (!Files.isDirectory(dir)) {
             throw new BadInputException(file.toString(), "folder " + dir + " does not exist");
         }
-        Path tmp = Files.createTempFile(dir, "." + target.getFileName(), ".part");
+        // Not Files.createTempFile: its owner-only permissions would stay on the finished file.
+        Path tmp = dir.resolve("." + target.getFileName() + "." + ProcessHandle.current().pid() + "."
+                + System.nanoTime() + ".part");
         try {
-            try (OutputStream os = new java.io.BufferedOutputStream(Files.newOutputStream(tmp), 1 << 16)) {
+            try (OutputStream os = new BufferedOutputStream(
+                    Files.newOutputStream(tmp, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE), 1 << 16)) {
                 body.write(os);
             }
             try {
