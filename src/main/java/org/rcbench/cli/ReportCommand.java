@@ -65,7 +65,7 @@ public final class ReportCommand implements Callable<Integer> {
             }
             String probe = r.context().probe().probeId();
             ProbeCalibration cal = probe == null ? null : store.latestCalibration(probe).orElse(null);
-            input = new ReportInput(r, trends, cal, Instant.now(), new VersionProvider().getVersion()[0]);
+            input = new ReportInput(r, trends, cal, Instant.now(), new VersionProvider().getVersion()[0].replaceFirst("^rcbench ", ""));
         }
         String html = HtmlReport.render(input);
         OutputFile.text(output, spec.commandLine().getOut(), w -> w.write(html));

@@ -218,9 +218,11 @@ public final class HtmlReport {
             if (!Double.isFinite(m.uncertainty())) {
                 continue;
             }
+            boolean duty = m.quantity().equals("duty");
             h.append("<tr><td>").append(escape(HtmlText.label(m.quantity()))).append("</td><td class=\"n\">")
-                    .append(escape(HtmlText.value(m.value(), m.unit()))).append("</td><td class=\"n\">")
-                    .append(escape(HtmlText.value(m.uncertainty(), m.unit())))
+                    .append(escape(duty ? HtmlText.byKey("duty", m.value()) : HtmlText.value(m.value(), m.unit())))
+                    .append("</td><td class=\"n\">")
+                    .append(escape(duty ? HtmlText.byKey("duty", m.uncertainty()) : HtmlText.value(m.uncertainty(), m.unit())))
                     .append(String.format(Locale.ROOT, " (k = %.0f)", m.coverage())).append("</td><td class=\"n\">")
                     .append(m.value() != 0 ? HtmlText.number(m.uncertainty() / Math.abs(m.value()) * 1e6, 3, false) + " ppm" : "—")
                     .append("</td></tr>\n");

@@ -41,7 +41,7 @@ final class HtmlText {
             return "—";
         }
         return switch (unit == null ? "" : unit) {
-            case "1", "" -> String.format(Locale.ROOT, "%.6g", v);
+            case "1", "" -> number(v, 6, false);
             case "count" -> String.format(Locale.ROOT, "%d", Math.round(v));
             case "ppm", "ppm/s" -> String.format(Locale.ROOT, "%.4g %s", v, unit);
             default -> SiFormat.format(v, unit, 4);
