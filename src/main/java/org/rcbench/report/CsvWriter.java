@@ -4,7 +4,6 @@ import java.io.Closeable;
 import java.io.Flushable;
 import java.io.IOException;
 import java.io.Writer;
-import java.math.BigDecimal;
 
 /**
  * Writes comma-separated values by RFC 4180: records end with CRLF; a field holding a comma, a
@@ -77,7 +76,55 @@ public final class CsvWriter implements Closeable, Flushable {
         if (v == Math.rint(v) && Math.abs(v) < 1e15) {
             return Long.toString((long) v);
         }
-        return new BigDecimal(Double.toString(v)).stripTrailingZeros().toPlainString();
+        return plain(Double.toString(v));
+    }
+
+    /**
+     * {@code Double.toString} text without its exponent: {@code 6.875E-4} becomes {@code 0.0006875},
+     * {@code 1.5E20} becomes {@code 150000000000000000000}; the digits are kept as they are, so the
+     * text reads back to the same double.
+     */
+    static String plain(String s) {
+        int e = s.indexOf('E');
+        if (e < 0) {
+            return s.endsWith(".0") ? s.substring(0, s.length() - 2) : s;
+        }
+        boolean negative = s.charAt(0) == '-';
+        int start = negative ? 1 : 0;
+        int exp = Integer.parseInt(s.substring(e + 1));
+        StringBuilder digits = new StringBuilder(e);
+        int point = -1;
+        for (int i = start; i < e; i++) {
+            char c = s.charAt(i);
+            if (c == '.') {
+                point = digits.length();
+            } else {
+                digits.append(c);
+            }
+        }
+        int intDigits = (point < 0 ? digits.length() : point) + exp; // digits before the decimal point
+        while (digits.length() > 1 && digits.charAt(digits.length() - 1) == '0' && digits.length() > intDigits) {
+            digits.setLength(digits.length() - 1);
+        }
+        StringBuilder out = new StringBuilder(digits.length() + Math.abs(exp) + 3);
+        if (negative) {
+            out.append('-');
+        }
+        if (intDigits <= 0) {
+            out.append("0.");
+            for (int i = 0; i < -intDigits; i++) {
+                out.append('0');
+            }
+            out.append(digits);
+        } else if (intDigits >= digits.length()) {
+            out.append(digits);
+            for (int i = digits.length(); i < intDigits; i++) {
+                out.append('0');
+            }
+        } else {
+            out.append(digits, 0, intDigits).append('.').append(digits, intDigits, digits.length());
+        }
+        return out.toString();
     }
 
     @Override

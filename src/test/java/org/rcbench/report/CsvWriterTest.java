@@ -39,6 +39,20 @@ class CsvWriterTest {
     }
 
     @Test
+    void plainTextMatchesBigDecimalForManyDoubles() {
+        // java.math.BigDecimal's toPlainString of the same digits is the reference.
+        java.util.Random rnd = new java.util.Random(42);
+        for (int i = 0; i < 20_000; i++) {
+            double v = (rnd.nextDouble() - 0.5) * Math.pow(10, rnd.nextInt(40) - 20);
+            String expected = new java.math.BigDecimal(Double.toString(v)).stripTrailingZeros().toPlainString();
+            if (v == Math.rint(v) && Math.abs(v) < 1e15) {
+                expected = Long.toString((long) v);
+            }
+            assertThat(CsvWriter.number(v)).as(Double.toString(v)).isEqualTo(expected);
+        }
+    }
+
+    @Test
     void notANumberIsAnEmptyField() {
         assertThat(CsvWriter.number(Double.NaN)).isEmpty();
         assertThat(CsvWriter.number(Double.POSITIVE_INFINITY)).isEmpty();
