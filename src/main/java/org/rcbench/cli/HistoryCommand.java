@@ -27,7 +27,20 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
-/** {@code rcbench history [BOARD|SN]}: the stored runs and the trend of each estimated part. */
+/**
+ * {@code rcbench history [BOARD|SN]}: the stored runs and the trend of each estimated part.
+ *
+ * <p>{@code --json} keys: {@code database}, {@code filter}, {@code runs} [{@code id},
+ * {@code recorded_utc}, {@code board}, {@code serial}, {@code verdict}, {@code frequency_hz},
+ * {@code top_suspect}, {@code note}], {@code trends} [{@code board}, {@code serial}, {@code part},
+ * {@code unit}, {@code nominal}, {@code tolerance_minus}, {@code tolerance_plus}, {@code runs},
+ * {@code span_years}, {@code slope_per_year}, {@code slope_se_per_year}, {@code slope_p_value},
+ * {@code relative_slope_per_year}, {@code points} [{@code run}, {@code recorded_utc}, {@code value},
+ * {@code low}, {@code high}], {@code projection} {{@code kind} (leaves_band, not_within_horizon,
+ * already_outside, not_significant, too_few_runs, no_tolerance), {@code edge}, {@code crossing_utc},
+ * {@code earliest_utc}, {@code latest_utc}, {@code years_from_last_run}, {@code horizon_years},
+ * {@code text}}]; numbers not known are null.
+ */
 @Command(name = "history", mixinStandardHelpOptions = true,
         description = {"List stored checks and the trend of each estimated part.",
             "For each unit and part: the least-squares drift per year with its standard error, and when",

@@ -32,7 +32,8 @@ import org.sqlite.SQLiteConfig;
  *
  * <p>User-fixable failures (locked beyond the timeout, not a database, damaged, read-only, newer
  * schema) throw {@link BadInputException} naming the file. Thread-safe: one connection, every
- * method synchronised (one writer per process; SQLite serialises the processes).
+ * method synchronised (one writer per process; SQLite serialises the processes). A write can wait up
+ * to the busy timeout for another process, so a window should call it off its UI thread.
  */
 public final class HistoryStore implements AutoCloseable {
     private final String name;
