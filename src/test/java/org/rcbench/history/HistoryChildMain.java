@@ -13,6 +13,7 @@ import java.time.Instant;
  * save DB SERIAL N   wait for a line on stdin, then save N runs of SERIAL one by one; print "saved N"
  * hold DB N          save N runs of unit HELD, then insert one more inside a write transaction,
  *                    print "inside" and sleep there until killed
+ * -Drcbench.test.mounts=FILE  consult FILE as the mount table (to force the rollback journal)
  * </pre>
  */
 public final class HistoryChildMain {
@@ -23,7 +24,9 @@ public final class HistoryChildMain {
         Path db = Path.of(args[1]);
         int n = Integer.parseInt(args[args.length - 1]);
         Instant t0 = Instant.parse("2024-01-01T00:00:00Z");
-        try (HistoryStore store = HistoryStore.open(db)) {
+        String mounts = System.getProperty("rcbench.test.mounts");
+        StoreOptions options = mounts == null ? StoreOptions.DEFAULTS : StoreOptions.DEFAULTS.withMountTable(Path.of(mounts));
+        try (HistoryStore store = HistoryStore.open(db, options)) {
             if (args[0].equals("save")) {
                 new BufferedReader(new InputStreamReader(System.in, StandardCharsets.UTF_8)).readLine();
                 for (int i = 0; i < n; i++) {

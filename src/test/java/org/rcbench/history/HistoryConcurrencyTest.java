@@ -8,6 +8,7 @@ import java.io.IOException;
 import java.io.InputStreamReader;
 import java.io.OutputStream;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashSet;
@@ -15,6 +16,8 @@ import java.util.List;
 import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
 
 /**
  * Several processes on one real history file: concurrent writers lose nothing, and a writer killed
@@ -27,12 +30,22 @@ class HistoryConcurrencyTest {
     @TempDir
     Path dir;
 
-    @Test
-    void twoWriterProcessesAtOnceLoseNoRun() throws Exception {
+    @ParameterizedTest
+    @ValueSource(strings = {"wal", "delete"})
+    void twoWriterProcessesAtOnceLoseNoRun(String journal) throws Exception {
         Path db = dir.resolve("shared.db");
-        Process a = child("save", db.toString(), "UNIT-A", Integer.toString(RUNS_EACH));
-        Process b = child("save", db.toString(), "UNIT-B", Integer.toString(RUNS_EACH));
-        try (HistoryStore viewer = HistoryStore.open(db)) { // a third user, as the bench window would be
+        StoreOptions options = StoreOptions.DEFAULTS;
+        List<String> jvm = new ArrayList<>();
+        if (journal.equals("delete")) {
+            Path mounts = dir.resolve("mounts");
+            Files.writeString(mounts, "server:/x " + dir.toRealPath() + " nfs rw 0 0\n");
+            options = options.withMountTable(mounts);
+            jvm.add("-Drcbench.test.mounts=" + mounts);
+        }
+        Process a = child(jvm, "save", db.toString(), "UNIT-A", Integer.toString(RUNS_EACH));
+        Process b = child(jvm, "save", db.toString(), "UNIT-B", Integer.toString(RUNS_EACH));
+        try (HistoryStore viewer = HistoryStore.open(db, options)) { // a third user, as the bench window would be
+            assertThat(viewer.journalMode()).isEqualTo(journal);
             for (Process p : List.of(a, b)) {
                 try (OutputStream go = p.getOutputStream()) {
                     go.write("go\n".getBytes(StandardCharsets.US_ASCII));
@@ -61,16 +74,30 @@ class HistoryConcurrencyTest {
         }
     }
 
-    @Test
-    void aWriterKilledInsideItsTransactionLeavesAConsistentFile() throws Exception {
+    @ParameterizedTest
+    @ValueSource(strings = {"wal", "delete"})
+    void aWriterKilledInsideItsTransactionLeavesAConsistentFile(String journal) throws Exception {
         Path db = dir.resolve("killed.db");
-        Process p = child("hold", db.toString(), "5");
+        StoreOptions options = StoreOptions.DEFAULTS;
+        List<String> jvm = new ArrayList<>();
+        if (journal.equals("delete")) {
+            // a mount table that puts the folder on NFS: the rollback journal is used
+            Path mounts = dir.resolve("mounts");
+            Files.writeString(mounts, "server:/x " + dir.toRealPath() + " nfs rw 0 0\n");
+            options = options.withMountTable(mounts);
+            jvm.add("-Drcbench.test.mounts=" + mounts);
+        }
+        Process p = child(jvm, "hold", db.toString(), "5");
         String line;
         try (BufferedReader out = new BufferedReader(new InputStreamReader(p.getInputStream(), StandardCharsets.UTF_8))) {
             line = out.readLine(); // blocks until the child is inside the transaction
             assertThat(line).isEqualTo("inside");
-            try (HistoryStore meanwhile = HistoryStore.open(db)) {
-                assertThat(meanwhile.runs(RunFilter.ALL)).hasSize(5); // the open transaction is invisible
+            if (journal.equals("wal")) {
+                try (HistoryStore meanwhile = HistoryStore.open(db, options)) {
+                    assertThat(meanwhile.runs(RunFilter.ALL)).hasSize(5); // the open transaction is invisible
+                }
+            } else {
+                assertThat(Files.exists(dir.resolve("killed.db-journal"))).isTrue(); // mid-transaction
             }
             p.destroyForcibly();
             assertThat(p.waitFor(30, TimeUnit.SECONDS)).isTrue();
@@ -78,7 +105,8 @@ class HistoryConcurrencyTest {
             p.destroyForcibly();
         }
         assertThat(p.exitValue()).isEqualTo(137); // 128 + SIGKILL: really killed, not ended
-        try (HistoryStore after = HistoryStore.open(db)) {
+        try (HistoryStore after = HistoryStore.open(db, options)) {
+            assertThat(after.journalMode()).isEqualTo(journal);
             assertThat(after.integrityCheck()).isEqualTo("ok");
             assertThat(after.runs(RunFilter.ALL)).hasSize(5).extracting(RunSummary::serial).containsOnly("HELD");
             assertThat(after.runs(RunFilter.of("PARTIAL"))).isEmpty();
@@ -89,9 +117,14 @@ class HistoryConcurrencyTest {
     }
 
     private static Process child(String... args) throws IOException {
+        return child(List.of(), args);
+    }
+
+    private static Process child(List<String> jvmOptions, String... args) throws IOException {
         String java = System.getProperty("java.home") + File.separator + "bin" + File.separator + "java";
-        List<String> cmd = new ArrayList<>(List.of(java, "-cp", System.getProperty("java.class.path"),
-                HistoryChildMain.class.getName()));
+        List<String> cmd = new ArrayList<>(List.of(java));
+        cmd.addAll(jvmOptions);
+        cmd.addAll(List.of("-cp", System.getProperty("java.class.path"), HistoryChildMain.class.getName()));
         cmd.addAll(List.of(args));
         return new ProcessBuilder(cmd).redirectError(ProcessBuilder.Redirect.INHERIT).start();
     }
