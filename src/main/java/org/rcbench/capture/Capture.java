@@ -30,6 +30,14 @@ public interface Capture extends AutoCloseable {
     Map<Integer, String> channels();
 
     /**
+     * Signals the file declares that are not channels, with the reason, e.g.
+     * {@code top.count -> "an 8-bit vector"}; empty for rcbench edge captures.
+     */
+    default Map<String, String> skippedSignals() {
+        return Map.of();
+    }
+
+    /**
      * Streams every edge to {@code sink}, then calls {@link EdgeSink#onEnd(long)} once.
      * May be called only once.
      */

@@ -13,6 +13,9 @@ import picocli.CommandLine.Spec;
         description = "Measure, predict and diagnose RC timing circuits of the 555 family.",
         subcommands = {
             // Each stage registers its command here, one line each.
+            MeasureCommand.class,
+            BenchCommand.class,
+            PortsCommand.class,
             PredictCommand.class,
             DesignCommand.class,
         })
