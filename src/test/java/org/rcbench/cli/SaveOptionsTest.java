@@ -64,10 +64,10 @@ class SaveOptionsTest {
         }
     }
 
-    private record Run(int code, String out, String err) {
+    record Run(int code, String out, String err) {
     }
 
-    private static Run run(String... args) {
+    static Run run(String... args) {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         ByteArrayOutputStream err = new ByteArrayOutputStream();
         PrintWriter o = new PrintWriter(out, true, StandardCharsets.UTF_8);

@@ -37,6 +37,34 @@ public final class Fixtures {
         return doc;
     }
 
+    /** A design of our own test board (not demo data): an astable with asymmetric C1 tolerance. */
+    public static final String DESIGN_TEXT = """
+            rcbench_design = 1
+
+            [board]
+            name = "TestBoard-A"
+
+            [timer]
+            topology = "astable"
+            family = "bipolar"
+            supply = "5 V"
+
+            [parts.R1]
+            role = "charge"
+            value = "2k2"
+            tolerance = "1%"
+
+            [parts.R2]
+            role = "shared"
+            value = "10k"
+            tolerance = "2%"
+
+            [parts.C1]
+            role = "timing"
+            value = "100n"
+            tolerance = "+50/-20%"
+            """;
+
     public static DesignRef design() {
         return DesignRef.of("board-a.toml", "# test design\n[parts.C1]\nvalue = \"100n\"\ntolerance = \"10%\"\n");
     }

@@ -203,41 +203,13 @@ class HistoryStoreTest {
                 .hasMessage("check result: verdict must be one of pass, marginal, fail, stopped, found none");
     }
 
-    /** A design of our own test board (not demo data): an astable with asymmetric C1 tolerance. */
-    static final String DESIGN = """
-            rcbench_design = 1
-
-            [board]
-            name = "TestBoard-A"
-
-            [timer]
-            topology = "astable"
-            family = "bipolar"
-            supply = "5 V"
-
-            [parts.R1]
-            role = "charge"
-            value = "2k2"
-            tolerance = "1%"
-
-            [parts.R2]
-            role = "shared"
-            value = "10k"
-            tolerance = "2%"
-
-            [parts.C1]
-            role = "timing"
-            value = "100n"
-            tolerance = "+50/-20%"
-            """;
-
     @Test
     void tolerancesTheDocumentLeavesOutComeFromTheRunsDesign() {
         var doc = Fixtures.check();
         ((com.fasterxml.jackson.databind.node.ObjectNode) doc.path("estimates").path("C1")).remove("tolerance");
         ((com.fasterxml.jackson.databind.node.ObjectNode) doc.path("estimates").path("R2")).remove("tolerance_pct");
         ((com.fasterxml.jackson.databind.node.ObjectNode) doc.path("estimates").path("R2")).put("tolerance", "+3/-1%");
-        RunRecord r = RunRecord.of(doc, RunContext.of("TestBoard-A", DesignRef.of("a.toml", DESIGN)));
+        RunRecord r = RunRecord.of(doc, RunContext.of("TestBoard-A", DesignRef.of("a.toml", Fixtures.DESIGN_TEXT)));
         // C1 from the design's "+50/-20%"; R2 as the document states it (text), not the design's 2 %.
         assertThat(r.content().estimates()).extracting(Estimate::tolerance)
                 .containsExactly(new Tolerance(0.2, 0.5), new Tolerance(0.01, 0.03));
