@@ -21,6 +21,9 @@ import picocli.CommandLine.Spec;
             RecordCommand.class,
             WatchCommand.class,
             CalibrateCommand.class,
+            HistoryCommand.class,
+            ReportCommand.class,
+            ExportCommand.class,
         })
 public final class RcbenchCommand implements Callable<Integer> {
     @Spec
