@@ -12,6 +12,7 @@ import org.rcbench.measure.MeterConfig;
 import org.rcbench.probe.SessionStatus;
 import org.rcbench.probe.StoredCalibration;
 import org.rcbench.source.DurationGate;
+import org.rcbench.source.HistoryCalibrations;
 import org.rcbench.source.LiveSource;
 import org.rcbench.source.StreamStart;
 import org.rcbench.units.SiFormat;
@@ -43,6 +44,9 @@ public final class CalibrateCommand implements Callable<Integer> {
 
     @Mixin
     SourceOptions source;
+
+    @Mixin
+    DatabaseOption database;
 
     @Option(names = "--reference", paramLabel = "FREQ", required = true, converter = ValueConverters.Frequency.class,
             description = "The reference signal's frequency (e.g. 1Hz, 10MHz).")
@@ -85,7 +89,7 @@ public final class CalibrateCommand implements Callable<Integer> {
             throw new BadInputException("--probe-id", "\"" + probeId + "\" is not up to 16 hex digits");
         }
         Terminal term = new Terminal(err, !plain && Terminal.detect());
-        LiveSource src = source.open(err);
+        LiveSource src = source.open(err, calibrations());
         DurationGate gate = new DurationGate(duration);
         CycleMeter[] meter = new CycleMeter[1];
         try (ShutdownGuard guard = new ShutdownGuard(src::close)) {
@@ -145,8 +149,8 @@ public final class CalibrateCommand implements Callable<Integer> {
         } else {
             String reference = SiFormat.format(referenceHz, "Hz", 6) + " reference ±" + trim(referencePpm) + " ppm, "
                     + m.cycles() + " cycles";
-            source.store().save(new StoredCalibration(id, offsetPpm, uPpm, reference, Instant.now()));
-            out.println("  stored in " + source.storePath() + "; sessions with this probe apply it from now on");
+            calibrations().save(new StoredCalibration(id, offsetPpm, uPpm, reference, Instant.now()));
+            out.println("  stored in the history " + database.path() + "; sessions with this probe apply it from now on");
         }
         out.flush();
         return ExitCodes.OK;
@@ -154,5 +158,10 @@ public final class CalibrateCommand implements Callable<Integer> {
 
     private static String trim(double v) {
         return java.math.BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
+    }
+
+    /** The probe calibrations in the history ({@code --db}). */
+    private HistoryCalibrations calibrations() {
+        return SourceOptions.calibrations(database);
     }
 }

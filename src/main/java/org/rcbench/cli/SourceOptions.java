@@ -6,7 +6,6 @@ import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
 import org.rcbench.common.BadInputException;
-import org.rcbench.json.CalibrationFile;
 import org.rcbench.probe.CalibrationStore;
 import org.rcbench.probe.ProbeProfile;
 import org.rcbench.probe.SessionConfig;
@@ -17,6 +16,7 @@ import org.rcbench.sim.ProbeOptions;
 import org.rcbench.sim.SimulationSpec;
 import org.rcbench.sim.Stimulus;
 import org.rcbench.source.DemoDesigns;
+import org.rcbench.source.HistoryCalibrations;
 import org.rcbench.source.LiveSource;
 import org.rcbench.source.SourceSpec;
 import org.rcbench.units.Unit;
@@ -104,10 +104,6 @@ public final class SourceOptions {
             description = "Simulated probe: pull the cable at board time AT for DOWN (e.g. 5s:1s; repeatable).")
     List<String> unplugs = new ArrayList<>();
 
-    @Option(names = "--calibrations", paramLabel = "FILE",
-            description = "Stored probe calibrations (default: calibrations.json in the user's data folder).")
-    Path calibrations;
-
     /** True when no source option was given (the built-in simulated board is used). */
     public boolean usesDefault() {
         return port == null && sim == null && replay == null;
@@ -116,16 +112,6 @@ public final class SourceOptions {
     /** True for a source that runs as fast as it is read (no wall-clock meaning). */
     public boolean fast() {
         return port == null && pace() == Pace.FAST;
-    }
-
-    /** The calibration store: {@code --calibrations FILE} or the user's default. */
-    public CalibrationStore store() {
-        return calibrations == null ? CalibrationFile.atDefault() : CalibrationFile.at(calibrations);
-    }
-
-    /** The calibration file in use. */
-    public Path storePath() {
-        return calibrations == null ? CalibrationFile.defaultPath() : calibrations;
     }
 
     /** The source the options describe; a conflicting or bad option is a one-line error naming it. */
@@ -152,14 +138,25 @@ public final class SourceOptions {
         return new SourceSpec.Simulated(label, DemoDesigns.resolve(label), Double.NaN, s, p);
     }
 
-    /** The source, not yet started; prints a note on {@code err} when the built-in board stands in. */
-    public LiveSource open(PrintWriter err) {
+    /**
+     * The source, not yet started, applying the calibrations in {@code store}; prints a note on
+     * {@code err} when the built-in board stands in.
+     */
+    public LiveSource open(PrintWriter err, CalibrationStore store) {
         SourceSpec spec = sourceSpec();
         if (usesDefault()) {
             err.println("rcbench: no --port, --sim or --replay given: simulating the demo board " + DemoDesigns.DEFAULT);
             err.flush();
         }
-        return LiveSource.of(spec, sessionConfig(), store());
+        return LiveSource.of(spec, sessionConfig(), store);
+    }
+
+    /** The probe calibrations kept in the history that {@code --db} names (checking {@code --db-wait}). */
+    static HistoryCalibrations calibrations(DatabaseOption db) {
+        if (!(db.waitSeconds >= 0) || db.waitSeconds > 86_400) {
+            throw new BadInputException("--db-wait", "must be 0 to 86400 seconds, not " + db.waitSeconds);
+        }
+        return HistoryCalibrations.at(db.path(), (int) Math.round(db.waitSeconds * 1000));
     }
 
     /** The session configuration: the defaults, with a faster reconnect poll for simulated probes. */

@@ -6,8 +6,8 @@ import org.rcbench.protocol.Hello;
 
 /**
  * Where the host keeps probe clock calibrations, by probe id, so that later sessions with the same
- * probe apply them. Implementations: a JSON file in the user's data folder
- * ({@code org.rcbench.json.CalibrationFile}); the SQLite history can take its place.
+ * probe apply them. The commands and the GUI use the history database
+ * ({@code org.rcbench.source.HistoryCalibrations}); tests may use any map.
  */
 public interface CalibrationStore {
     /** Saves a calibration; the newest one of a probe is the one applied. */

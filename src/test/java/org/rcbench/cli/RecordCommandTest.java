@@ -33,8 +33,8 @@ class RecordCommandTest {
     void recordsExactlyTheBoardsEdgesForTheGivenProbeTime(@TempDir Path dir) throws Exception {
         Path file = dir.resolve("piper.rce");
         CliRun r = CliRun.of("record", "--sim", "demo:piper-mk2", "--fault", "C1=-25%", "--jitter", "1us", "--seed", "3",
-                "--sim-speed", "fast", "--duration", "5s", "-o", file.toString(), "--calibrations",
-                dir.resolve("cal.json").toString());
+                "--sim-speed", "fast", "--duration", "5s", "-o", file.toString(), "--db",
+                dir.resolve("history.db").toString());
         assertThat(r.exitCode()).as(r.err()).isEqualTo(ExitCodes.OK);
         assertThat(r.out()).startsWith("recorded ").contains(file.toString());
         RecordingSink got = read(file);
@@ -59,7 +59,7 @@ class RecordCommandTest {
     void theRecordingMeasuresAsTheModelPredicts(@TempDir Path dir) throws Exception {
         Path file = dir.resolve("aged.rce.gz");
         CliRun r = CliRun.of("record", "--sim", "demo:piper-mk2", "--fault", "C1=-25%", "--sim-speed", "fast",
-                "--duration", "3s", "--gzip", "-o", file.toString(), "--calibrations", dir.resolve("c.json").toString());
+                "--duration", "3s", "--gzip", "-o", file.toString(), "--db", dir.resolve("history.db").toString());
         assertThat(r.exitCode()).as(r.err()).isEqualTo(ExitCodes.OK);
         CliRun m = CliRun.of("measure", "--json", file.toString());
         assertThat(m.exitCode()).as(m.err()).isEqualTo(ExitCodes.OK);
@@ -122,7 +122,7 @@ class RecordCommandTest {
     void anUnplugMidRecordingIsReportedAndTheRecordingStaysIntact(@TempDir Path dir) throws Exception {
         Path file = dir.resolve("unplug.rce");
         CliRun r = CliRun.of("record", "--sim", "demo:piper-mk2", "--sim-speed", "fast", "--sim-unplug", "2s:0.5s",
-                "--duration", "4s", "-o", file.toString(), "--calibrations", dir.resolve("c.json").toString());
+                "--duration", "4s", "-o", file.toString(), "--db", dir.resolve("history.db").toString());
         assertThat(r.exitCode()).as(r.err()).isEqualTo(ExitCodes.OK);
         RecordingSink got = read(file);
         int gap = 0;

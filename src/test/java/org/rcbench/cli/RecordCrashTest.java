@@ -27,8 +27,8 @@ class RecordCrashTest {
     static Process record(Path file, Path dir) throws Exception {
         String java = System.getProperty("java.home") + File.separator + "bin" + File.separator + "java";
         return new ProcessBuilder(java, "-cp", System.getProperty("java.class.path"), Main.class.getName(), "record",
-                "--sim", "demo:piper-mk2", "--jitter", "1us", "--seed", "4", "-o", file.toString(), "--calibrations",
-                dir.resolve("cal.json").toString())
+                "--sim", "demo:piper-mk2", "--jitter", "1us", "--seed", "4", "-o", file.toString(), "--db",
+                dir.resolve("history.db").toString())
                 .redirectErrorStream(true).redirectOutput(dir.resolve("child.log").toFile()).start();
     }
 

@@ -19,8 +19,8 @@ class WatchCommandTest {
         all[0] = "watch";
         System.arraycopy(args, 0, all, 1, args.length);
         all[args.length + 1] = "--sim-speed=fast";
-        all[args.length + 2] = "--calibrations";
-        all[args.length + 3] = dir.resolve("cal.json").toString();
+        all[args.length + 2] = "--db";
+        all[args.length + 3] = dir.resolve("history.db").toString();
         return CliRun.of(all);
     }
 
@@ -87,7 +87,7 @@ class WatchCommandTest {
     void aRecordingReplaysIntoTheSameReadout(@TempDir Path dir) {
         Path file = dir.resolve("aged.rce");
         CliRun rec = CliRun.of("record", "--sim", "demo:piper-mk2", "--fault", "C1=-25%", "--sim-speed", "fast",
-                "--duration", "3s", "-o", file.toString(), "--calibrations", dir.resolve("cal.json").toString());
+                "--duration", "3s", "-o", file.toString(), "--db", dir.resolve("history.db").toString());
         assertThat(rec.exitCode()).as(rec.err()).isZero();
         CliRun r = watch(dir, "--replay", file.toString(), "--design", "demo:piper-mk2", "--once");
         assertThat(r.exitCode()).as(r.err()).isEqualTo(ExitCodes.CHECK_FAILED);
@@ -99,7 +99,7 @@ class WatchCommandTest {
     void withoutADesignThereIsNoVerdict(@TempDir Path dir) {
         Path file = dir.resolve("x.rce");
         CliRun.of("record", "--sim", "demo:piper-mk2", "--sim-speed", "fast", "--duration", "1s", "-o", file.toString(),
-                "--calibrations", dir.resolve("cal.json").toString());
+                "--db", dir.resolve("history.db").toString());
         CliRun r = watch(dir, "--replay", file.toString(), "--once");
         assertThat(r.exitCode()).as(r.err()).isEqualTo(ExitCodes.OK);
         assertThat(r.out()).doesNotContain("board:").doesNotContain("band");

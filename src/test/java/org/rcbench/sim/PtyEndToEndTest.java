@@ -125,7 +125,7 @@ class PtyEndToEndTest {
         CliRun rec;
         try {
             rec = CliRun.of("record", "--port", pty[1].toString(), "--probe-type", "stream", "--duration", "5s",
-                    "--plain", "-o", file.toString(), "--calibrations", dir.resolve("cal.json").toString());
+                    "--plain", "-o", file.toString(), "--db", dir.resolve("history.db").toString());
         } finally {
             probe.close();
             ptyOut.close();
