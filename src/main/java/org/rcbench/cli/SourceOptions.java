@@ -50,7 +50,7 @@ public final class SourceOptions {
     Path replay;
 
     @Option(names = "--fault", paramLabel = "NAME=VALUE", split = ",",
-            description = "Simulated board: a part fault or condition, e.g. C1=-35%, R2=12k, C1=68n, leak=1M,"
+            description = "Simulated board: a part fault or condition, e.g. C1=-35%%, R2=12k, C1=68n, leak=1M,"
                 + " control=4k7, supply=7.2V (repeatable).")
     List<String> faults = new ArrayList<>();
 
@@ -64,7 +64,7 @@ public final class SourceOptions {
 
     @Option(names = "--warm-up", paramLabel = "CHANGE@TIME",
             description = "Simulated board: timing starts off by CHANGE and settles with time constant TIME"
-                + " (e.g. +2%@30s).")
+                + " (e.g. +2%%@30s).")
     String warmUp;
 
     @Option(names = "--seed", paramLabel = "N", defaultValue = "1",

@@ -28,7 +28,7 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "watch", mixinStandardHelpOptions = true,
         description = {"Show a live readout: frequency, duty, high and low time (or pulse width), jitter; with a design"
-            + " its nominal value, 95 % band and a verdict per quantity, and a tuning hint for a potentiometer.",
+            + " its nominal value, 95 %% band and a verdict per quantity, and a tuning hint for a potentiometer.",
             "Exit status 1 when a quantity ends outside the design's worst-case band.",
             "Caution: the probe's ground is the computer's ground. Never connect it to mains-referenced or"
                 + " transformerless circuits without isolation; mind charged capacitors."})

@@ -123,4 +123,10 @@ class WatchCommandTest {
         p.status("streaming", "STREAMING");
         assertThat(pipe.toString()).isEqualTo("a\nb\n\nwaiting 1\nstreaming\n");
     }
+
+    @Test
+    void helpTextsShowTheirPercentSigns() {
+        CliRun w = CliRun.of("watch", "--help");
+        assertThat(w.out()).contains("95 % band").contains("C1=-35%, R2=12k").contains("+2%@30s").doesNotContain("%%");
+    }
 }

@@ -161,4 +161,15 @@ class PtyEndToEndTest {
         double expected = VirtualBoard.of(piper, spec).predicted().frequencyHz();
         assertThat(f).isCloseTo(expected, within(expected * 1e-6));
     }
+
+    @Test
+    void whileNoProbeAnswersWatchShowsItsWaitingAndThenSaysWhy(@TempDir Path dir) throws Exception {
+        Path[] pty = ptyPair(dir);
+        CliRun r = CliRun.of("watch", "--port", pty[1].toString(), "--probe-type", "stream", "--plain", "--db",
+                dir.resolve("history.db").toString());
+        assertThat(r.exitCode()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.out()).contains("waiting for the probe's hello on " + pty[1]);
+        assertThat(r.err()).startsWith("rcbench: " + pty[1] + " (/dev/pts/").contains("): no hello from the probe after 3.0 s (nothing received)");
+        assertThat(r.err().lines()).hasSize(1);
+    }
 }
