@@ -24,10 +24,10 @@ final class BandCheck {
 
     /** Where a measured value sits against the design's bands. */
     enum Verdict {
-        IN_BAND("ok: in the 95 % band"),
-        WITHIN_WORST_CASE("ok: outside the 95 % band, within worst case"),
+        IN_BAND("ok, in the 95 % band"),
+        WITHIN_WORST_CASE("ok, within worst case"),
         AT_LIMIT("at the worst-case limit"),
-        OUT("OUT of the worst-case band"),
+        OUT("OUT of worst case"),
         NONE("");
 
         final String words;
@@ -64,15 +64,15 @@ final class BandCheck {
         return Verdict.AT_LIMIT;
     }
 
-    /** The deviation from nominal in words, e.g. {@code +33.4 % from nominal}. */
+    /** The deviation from nominal, e.g. {@code +33.4 %} (duty: {@code +1.20 % pts}). */
     static String offset(double value, double nominal, TimingQuantity q) {
         if (Double.isNaN(value) || Double.isNaN(nominal) || nominal == 0) {
             return "";
         }
         if (q == TimingQuantity.DUTY) {
-            return String.format(Locale.ROOT, "%+.2f %% pts from nominal", (value - nominal) * 100);
+            return String.format(Locale.ROOT, "%+.2f %% pts", (value - nominal) * 100);
         }
-        return String.format(Locale.ROOT, "%+.1f %% from nominal", (value / nominal - 1) * 100);
+        return String.format(Locale.ROOT, "%+.1f %%", (value / nominal - 1) * 100);
     }
 
     /**

@@ -100,15 +100,12 @@ public final class CalibrateCommand implements Callable<Integer> {
             }, gate);
             StreamStart start = src.awaitStreaming(source.streamTimeout());
             long begun = System.nanoTime();
-            while (!src.ended() && !guard.triggered() && !gate.await(250)) {
+            LiveLoop.run(src, gate, guard, source, duration, 250, () -> false, () -> {
                 SessionStatus st = src.status();
                 term.status(String.format(Locale.ROOT, "calibrating against %s: %.0f of %.0f s | %s",
                         SiFormat.format(referenceHz, "Hz", 6), Math.min(duration, (System.nanoTime() - begun) * 1e-9),
                         duration, st.line()), st.state().name());
-                if (!source.fast() && (System.nanoTime() - begun) * 1e-9 > duration + 5) {
-                    break;
-                }
-            }
+            });
             boolean stopped = guard.triggered();
             src.close();
             term.finish();

@@ -77,7 +77,7 @@ public final class RecordCommand implements Callable<Integer> {
         Recorder[] recorder = new Recorder[1];
         try (ShutdownGuard guard = new ShutdownGuard(src::close)) {
             src.start(start -> {
-                recorder[0] = Recorder.create(output, header(start), RecorderOptions.defaults().withGzip(gzip)
+                recorder[0] = Recorder.create(output, header(start, src.spec()), RecorderOptions.defaults().withGzip(gzip)
                         .withOverwrite(overwrite));
                 tally.target = recorder[0];
                 tally.ticksPerSecond = start.timebase().ticksPerSecond();
@@ -95,25 +95,17 @@ public final class RecordCommand implements Callable<Integer> {
             }
             StreamStart start = src.started();
             status.notice("recording " + src.name() + " to " + output + " (" + start.clockNote() + ")");
-            long wallStart = System.nanoTime();
-            SessionState last = null;
-            while (!src.ended() && !guard.triggered()) {
-                if (gate.await(200)) {
-                    break;
-                }
+            SessionState[] last = new SessionState[1];
+            LiveLoop.run(src, gate, guard, source, duration, 200, () -> false, () -> {
                 SessionStatus st = src.status();
-                if (st.state() == SessionState.RECONNECTING && last != SessionState.RECONNECTING) {
+                if (st.state() == SessionState.RECONNECTING && last[0] != SessionState.RECONNECTING) {
                     status.notice("rcbench: " + src.name() + " disconnected; the " + tally.edges
                             + " edges recorded so far are safe in " + output + " (waiting for the probe to come back;"
                             + " Ctrl-C stops)");
                 }
-                last = st.state();
+                last[0] = st.state();
                 status.status(line(tally, st), st.state().name());
-                double wall = (System.nanoTime() - wallStart) * 1e-9;
-                if (duration != null && !source.fast() && wall > duration + 3) {
-                    break; // a silent or absent probe: real time has run out
-                }
-            }
+            });
             SessionStatus end = src.status();
             src.close();
             status.finish();
@@ -136,12 +128,11 @@ public final class RecordCommand implements Callable<Integer> {
         }
     }
 
-    private Map<String, String> header(StreamStart start) {
+    private static Map<String, String> header(StreamStart start, SourceSpec s) {
         Map<String, String> h = EdgeCaptureFormat.header(start.timebase(), start.channelNames());
         h.put(EdgeCaptureFormat.PROBE, start.hello() == null ? start.source() : start.hello().summary());
         h.put(EdgeCaptureFormat.STARTED, Instant.now().truncatedTo(ChronoUnit.SECONDS).toString());
         h.put("source", start.source());
-        SourceSpec s = source.sourceSpec();
         if (s instanceof SourceSpec.Simulated sim) {
             h.put("simulation", sim.description());
         }

@@ -143,7 +143,11 @@ public final class SourceOptions {
      * {@code err} when the built-in board stands in.
      */
     public LiveSource open(PrintWriter err, CalibrationStore store) {
-        SourceSpec spec = sourceSpec();
+        return open(err, store, sourceSpec());
+    }
+
+    /** As {@link #open(PrintWriter, CalibrationStore)} for a spec already made with {@link #sourceSpec()}. */
+    public LiveSource open(PrintWriter err, CalibrationStore store, SourceSpec spec) {
         if (usesDefault()) {
             err.println("rcbench: no --port, --sim or --replay given: simulating the demo board " + DemoDesigns.DEFAULT);
             err.flush();

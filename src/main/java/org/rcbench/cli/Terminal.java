@@ -8,20 +8,40 @@ import java.util.List;
  * terminal a one-line status is redrawn in place with a carriage return, and a block of lines with
  * the ANSI "cursor up" (ESC [ n A) and "erase to end of line" (ESC [ K) sequences of ECMA-48;
  * otherwise each update is printed as new lines (a status line only when it says something new).
- * Not thread-safe: one thread draws.
+ * On a terminal, lines are cut to its width ({@code COLUMNS}, else 100 columns) so that none wraps
+ * and the redraw stays in place. Not thread-safe: one thread draws.
  */
 final class Terminal {
     private static final String ERASE_LINE = "\u001b[K";
 
     private final PrintWriter out;
     private final boolean interactive;
+    private final int width;
     private int blockLines;
     private boolean statusShown;
     private String lastPlain = "";
 
     Terminal(PrintWriter out, boolean interactive) {
+        this(out, interactive, columns());
+    }
+
+    Terminal(PrintWriter out, boolean interactive, int width) {
         this.out = out;
         this.interactive = interactive;
+        this.width = width;
+    }
+
+    private static int columns() {
+        try {
+            int c = Integer.parseInt(System.getenv().getOrDefault("COLUMNS", "100").strip());
+            return c >= 20 ? c : 100;
+        } catch (NumberFormatException e) {
+            return 100;
+        }
+    }
+
+    private String fit(String line) {
+        return line.length() < width ? line : line.substring(0, width - 2) + "…";
     }
 
     /**
@@ -42,7 +62,7 @@ final class Terminal {
      */
     void status(String line, String key) {
         if (interactive) {
-            out.print("\r" + line + ERASE_LINE);
+            out.print("\r" + fit(line) + ERASE_LINE);
             statusShown = true;
         } else if (!key.equals(lastPlain)) {
             out.println(line);
@@ -61,7 +81,7 @@ final class Terminal {
                 sb.append("\u001b[").append(blockLines).append('A').append('\r');
             }
             for (String l : lines) {
-                sb.append(l).append(ERASE_LINE).append('\n');
+                sb.append(fit(l)).append(ERASE_LINE).append('\n');
             }
             // Erase what is left of a longer previous block.
             for (int i = lines.size(); i < blockLines; i++) {

@@ -84,7 +84,7 @@ public final class WatchCommand implements Callable<Integer> {
                 : sourceSpec instanceof SourceSpec.Simulated sim ? sim.design() : null;
         Prediction prediction = d == null ? null : new Predictor(20_000, 1).predict(d);
         Topology topology = d == null ? null : d.circuit().topology();
-        LiveSource src = source.open(err, calibrations());
+        LiveSource src = source.open(err, calibrations(), sourceSpec);
         // A fast source with --once reads a fixed stretch of probe time, so that the readout is repeatable.
         Double span = duration != null ? duration : once && source.fast() ? (Double) FAST_ONCE_SECONDS : null;
         DurationGate gate = new DurationGate(span == null ? Double.POSITIVE_INFINITY : span);
@@ -112,24 +112,14 @@ public final class WatchCommand implements Callable<Integer> {
             StreamStart start = src.awaitStreaming(source.streamTimeout());
             term.finish();
             long begun = System.nanoTime();
-            long nextDraw = System.nanoTime();
-            while (!src.ended() && !guard.triggered()) {
-                if (gate.await(Math.min(interval, 100))) {
-                    break;
-                }
-                LiveReading r = live[0].latest();
-                if (once) {
-                    if ((span == null && enough(r)) || System.nanoTime() - begun > ONCE_TIMEOUT_NANOS) {
-                        break;
-                    }
-                } else if (System.nanoTime() - nextDraw >= 0) {
-                    term.block(WatchView.render(start, src.status(), r, d, prediction).lines());
-                    nextDraw = System.nanoTime() + interval * 1_000_000L;
-                }
-                if (duration != null && !source.fast() && (System.nanoTime() - begun) * 1e-9 > duration + 3) {
-                    break; // a silent probe: real time has run out
-                }
-            }
+            long[] nextDraw = {System.nanoTime()};
+            LiveLoop.run(src, gate, guard, source, span, Math.min(interval, 100), () -> once && (span == null
+                    && enough(live[0].latest()) || System.nanoTime() - begun > ONCE_TIMEOUT_NANOS), () -> {
+                        if (!once && System.nanoTime() - nextDraw[0] >= 0) {
+                            term.block(WatchView.render(start, src.status(), live[0].latest(), d, prediction).lines());
+                            nextDraw[0] = System.nanoTime() + interval * 1_000_000L;
+                        }
+                    });
             SessionStatus before = src.status();
             src.close();
             LiveReading r = live[0].latest();

@@ -20,7 +20,7 @@ import org.rcbench.units.SiFormat;
  * A pure function of its inputs, so it is tested without a terminal.
  */
 final class WatchView {
-    private static final String ROW = "  %-11s %-16s %-11s %-25s %s";
+    private static final String ROW = "  %-11s %-14s %-11s %-24s %s";
 
     /** The lines, whether any quantity was judged, and whether any is out of its worst-case band. */
     record Screen(List<String> lines, boolean judged, boolean fails) {

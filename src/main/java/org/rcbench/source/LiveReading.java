@@ -13,8 +13,8 @@ import org.rcbench.measure.MonostableMeter.MonostableResult;
  * @param edges        edges seen on every channel
  * @param gaps         gaps seen on every channel
  * @param probeSeconds probe time from the first edge to the latest edge or heartbeat
- * @param final_       true for the reading published at the end of the stream
+ * @param atEnd       true for the reading published at the end of the stream
  */
 public record LiveReading(Measurement measurement, MonostableResult monostable, BistableResult bistable, long edges,
-        long gaps, double probeSeconds, boolean final_) {
+        long gaps, double probeSeconds, boolean atEnd) {
 }

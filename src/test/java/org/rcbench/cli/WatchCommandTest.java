@@ -34,10 +34,10 @@ class WatchCommandTest {
     void anAgedCapacitorReadsOutOfBandWithTheRightSignature(@TempDir Path dir) {
         CliRun r = watch(dir, "--sim", "demo:piper-mk2", "--fault", "C1=-25%", "--once");
         assertThat(r.exitCode()).as(r.err()).isEqualTo(ExitCodes.CHECK_FAILED);
-        assertThat(line(r.out(), "frequency")).endsWith("OUT of the worst-case band (+33.3 % from nominal)");
-        assertThat(line(r.out(), "high")).endsWith("OUT of the worst-case band (-25.0 % from nominal)");
-        assertThat(line(r.out(), "low")).endsWith("OUT of the worst-case band (-25.0 % from nominal)");
-        assertThat(line(r.out(), "duty")).endsWith("ok: in the 95 % band");
+        assertThat(line(r.out(), "frequency")).endsWith("OUT of worst case (+33.3 %)");
+        assertThat(line(r.out(), "high")).endsWith("OUT of worst case (-25.0 %)");
+        assertThat(line(r.out(), "low")).endsWith("OUT of worst case (-25.0 %)");
+        assertThat(line(r.out(), "duty")).endsWith("ok, in the 95 % band");
         assertThat(r.out()).contains("  board: OUT OF BAND");
     }
 
@@ -49,7 +49,7 @@ class WatchCommandTest {
         double nominal = new ObjectMapper().readTree(p.out()).at("/nominal/frequency_hz").asDouble();
         String f = line(r.out(), "frequency");
         assertThat(f).contains(PredictCommand.value(org.rcbench.circuit.TimingQuantity.FREQUENCY, nominal))
-                .endsWith("ok: in the 95 % band");
+                .endsWith("ok, in the 95 % band");
         assertThat(r.out()).contains("  board: within the design's bands");
         assertThat(r.err()).doesNotContain("Exception");
     }
@@ -70,7 +70,7 @@ class WatchCommandTest {
         CliRun r = watch(dir, "--sim", "demo:wren", "--once");
         assertThat(r.exitCode()).as(r.err()).isEqualTo(ExitCodes.OK);
         assertThat(line(r.out(), "triggers")).contains("2 pulses timed");
-        assertThat(line(r.out(), "pulse width")).endsWith("ok: in the 95 % band");
+        assertThat(line(r.out(), "pulse width")).endsWith("ok, in the 95 % band");
     }
 
     @Test
@@ -91,7 +91,7 @@ class WatchCommandTest {
         assertThat(rec.exitCode()).as(rec.err()).isZero();
         CliRun r = watch(dir, "--replay", file.toString(), "--design", "demo:piper-mk2", "--once");
         assertThat(r.exitCode()).as(r.err()).isEqualTo(ExitCodes.CHECK_FAILED);
-        assertThat(line(r.out(), "frequency")).endsWith("(+33.3 % from nominal)");
+        assertThat(line(r.out(), "frequency")).endsWith("(+33.3 %)");
         assertThat(r.out()).contains("replay done: ");
     }
 
@@ -109,19 +109,22 @@ class WatchCommandTest {
     @Test
     void aTerminalRedrawsInPlaceAndAPipeGetsPlainLines() {
         StringWriter tty = new StringWriter();
-        Terminal t = new Terminal(new PrintWriter(tty), true);
+        Terminal t = new Terminal(new PrintWriter(tty), true, 100);
         t.block(List.of("a", "b", "c"));
         t.block(List.of("d", "e"));
         // ECMA-48: ESC [ 3 A moves up over the three lines drawn; ESC [ K erases what was left of each.
         assertThat(tty.toString()).isEqualTo("a\u001b[K\nb\u001b[K\nc\u001b[K\n"
                 + "\u001b[3A\rd\u001b[K\ne\u001b[K\n\u001b[K\n\u001b[1A");
         StringWriter pipe = new StringWriter();
-        Terminal p = new Terminal(new PrintWriter(pipe), false);
+        Terminal p = new Terminal(new PrintWriter(pipe), false, 100);
         p.block(List.of("a", "b"));
         p.status("waiting 1", "WAITING");
         p.status("waiting 2", "WAITING");
         p.status("streaming", "STREAMING");
         assertThat(pipe.toString()).isEqualTo("a\nb\n\nwaiting 1\nstreaming\n");
+        StringWriter narrow = new StringWriter();
+        new Terminal(new PrintWriter(narrow), true, 20).status("a status line longer than twenty", "S");
+        assertThat(narrow.toString()).isEqualTo("\ra status line long…\u001b[K");
     }
 
     @Test
