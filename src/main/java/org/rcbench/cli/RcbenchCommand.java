@@ -18,6 +18,9 @@ import picocli.CommandLine.Spec;
             PortsCommand.class,
             PredictCommand.class,
             DesignCommand.class,
+            CheckCommand.class,
+            TuneCommand.class,
+            EvidenceCommand.class,
         })
 public final class RcbenchCommand implements Callable<Integer> {
     @Spec

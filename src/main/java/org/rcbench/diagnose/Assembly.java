@@ -21,6 +21,14 @@ final class Assembly {
     static final double Z95 = 1.959963984540054;
     /** The best fit is poor when its misfit passes the chi-square 99.9 % point for the number of quantities. */
     static final double POOR_FIT = 0.999;
+    /** chi-square POOR_FIT points for 1..4 degrees of freedom, from Commons Math. */
+    private static final double[] POOR_FIT_CHI2 = new double[5];
+
+    static {
+        for (int n = 1; n < POOR_FIT_CHI2.length; n++) {
+            POOR_FIT_CHI2[n] = new ChiSquaredDistribution(n).inverseCumulativeProbability(POOR_FIT);
+        }
+    }
 
     private Assembly() {
     }
@@ -67,7 +75,7 @@ final class Assembly {
         for (Fit f : fits) {
             best = Math.min(best, f.misfit());
         }
-        boolean fitsWell = best <= new ChiSquaredDistribution(target.size()).inverseCumulativeProbability(POOR_FIT);
+        boolean fitsWell = best <= POOR_FIT_CHI2[Math.min(target.size(), POOR_FIT_CHI2.length - 1)];
         String summary = summary(fits.get(0), w[0], suspects, ambiguities, fitsWell, best, target.size());
         return new Diagnosis(o, explanations, suspects, estimates, ambiguities, noFault, fitsWell, summary);
     }
@@ -135,18 +143,22 @@ final class Assembly {
                     + " measured quantities): the fault may lie outside the model (a circuit other than the design, a"
                     + " broken connection, an unsteady supply). ", misfit, quantities));
         }
-        if (lead.hypothesis().faults().isEmpty()) {
-            sb.append(String.format(Locale.ROOT, "No part needs to be outside its band to explain the measurement"
-                    + " (probability %.2f).", p));
-            return sb.toString();
-        }
         boolean split = false;
         for (Ambiguity a : ambiguities) {
             split |= a.between().size() > 1 && !a.between().get(1).equals("no fault");
         }
+        if (lead.hypothesis().faults().isEmpty()) {
+            sb.append(String.format(Locale.ROOT, "No part needs to be outside its band to explain the measurement"
+                    + " (probability %.2f).", p));
+            if (split) {
+                sb.append(" If a part is off, the measurement cannot tell which: ")
+                        .append(Identifiability.alternatives(ambiguities.get(0).between())).append('.');
+            }
+            return sb.toString();
+        }
         if (split) {
             Ambiguity a = ambiguities.get(0);
-            sb.append("Ambiguous: ").append(Identifiability.orList(a.between()).replace(" and ", " or "))
+            sb.append("Ambiguous: ").append(Identifiability.alternatives(a.between()))
                     .append(" fit the measurement equally well; ").append(a.determined()).append('.');
             return sb.toString();
         }

@@ -49,8 +49,12 @@ final class DiagnosisModel {
     static final Prior LEAK_PRIOR = Prior.normal(Math.log(30), 1.2);
     /** Control-load fault prior on {@code ln(R_load / R_pin)}: median 3 times the pin's own source resistance (common practice, no source). */
     static final Prior CONTROL_PRIOR = Prior.normal(Math.log(3), 1.2);
-    /** Prior chance of a control-pin load the design does not show (common practice, no source). */
-    static final double CONTROL_PROBABILITY = 0.01;
+    /**
+     * Prior chance of a control-pin load the design does not show, heavy enough to matter (a leaky
+     * bypass capacitor, a solder bridge, flux residue): rarer than a resistor out of tolerance
+     * (common practice, no source).
+     */
+    static final double CONTROL_PROBABILITY = 0.005;
     /** Prior chance that the other timer family is fitted (common practice, no source). */
     static final double FAMILY_PROBABILITY = 0.01;
     /** Prior on a wiper's logit: a broad spread about the design's position (a logistic-like sd, nearly flat over the travel). */
@@ -187,13 +191,18 @@ final class DiagnosisModel {
         return sb.length() == 0 ? "the timing capacitor" : sb.toString();
     }
 
-    /** Prior chance of capacitor leakage by the timing capacitor's kind (common practice, no source). */
+    /**
+     * Prior chance of leakage across the timing capacitor that matters for the timing, by the
+     * capacitor's kind: electrolytics have a stated leakage current and it grows with age (5 %),
+     * tantalum 3 %, class-2 ceramics 0.3 %, film and C0G parts with their gigaohm insulation 0.1 %,
+     * unstated kinds 1 % (common practice, no source).
+     */
     static double leakProbability(CircuitSpec spec) {
-        double p = 0.005;
+        double p = 0.001;
         for (Element c : spec.withRole(Role.TIMING)) {
             PartKind k = c.kind();
             double q = k == PartKind.ALUMINIUM_ELECTROLYTIC ? 0.05 : k == PartKind.TANTALUM ? 0.03
-                    : k.isClass2Ceramic() ? 0.01 : k == PartKind.UNSPECIFIED ? 0.01 : 0.005;
+                    : k.isClass2Ceramic() ? 0.003 : k == PartKind.UNSPECIFIED ? 0.01 : 0.001;
             p = Math.max(p, q);
         }
         return p;

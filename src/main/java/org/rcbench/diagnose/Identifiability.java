@@ -23,7 +23,7 @@ import org.rcbench.circuit.TimingQuantity;
  * so. The pair is <em>structurally</em> inseparable when the two faults change the measured log
  * quantities in proportional ways (cosine of the effect vectors above 0.9995): a monostable's R
  * against its C, an astable's charge resistor against a loaded control pin. Then no precision helps
- * and only another kind of measurement separates them ({@link #separatingMeasurement}).
+ * and only another kind of measurement separates them ({@link #separatingMeasurements}).
  *
  * <p>"No fault" competes too: when it fits within the same margin as the leading fault, the
  * measurement is also explained with every part inside its band. Stateless.
@@ -35,72 +35,107 @@ final class Identifiability {
     static final double MIN_RATIO = 0.01;
     /** Effect vectors closer than this cosine are proportional. */
     static final double PARALLEL = 0.9995;
+    /** At most this many rival explanations are named. */
+    static final int MAX_RIVALS = 4;
+    /** When "no fault" fits as well, rivals are named only if the leading fault has at least this probability. */
+    static final double WORTH_NAMING = 0.05;
 
     private Identifiability() {
     }
 
     /**
      * The ambiguities of a solved diagnosis. {@code fits} and {@code weights} are sorted by weight,
-     * heaviest first.
+     * heaviest first. The question asked is whether the top suspect (the fault with the largest
+     * summed probability) could be innocent: its strongest explanation is compared with every
+     * explanation that leaves it out.
      */
     static List<Ambiguity> analyse(DiagnosisModel dm, Target target, List<Fit> fits, double[] weights) {
         List<Ambiguity> out = new ArrayList<>();
-        if (fits.isEmpty() || fits.get(0).hypothesis().faults().isEmpty()) {
+        Fault top = topSuspect(dm, fits, weights);
+        if (top == null) {
             return out;
         }
-        Fit lead = fits.get(0);
-        int size = lead.hypothesis().faults().size();
+        int leadIndex = -1;
+        for (int i = 0; i < fits.size() && leadIndex < 0; i++) {
+            if (fits.get(i).hypothesis().faults().contains(top)) {
+                leadIndex = i;
+            }
+        }
+        Fit lead = fits.get(leadIndex);
         List<Fit> rivals = new ArrayList<>();
-        for (int i = 1; i < fits.size(); i++) {
+        for (int i = 0; i < fits.size() && rivals.size() < MAX_RIVALS; i++) {
             Fit f = fits.get(i);
-            if (f.hypothesis().faults().size() != size || weights[i] < MIN_RATIO * weights[0]) {
+            if (f.hypothesis().faults().isEmpty() || f.hypothesis().faults().contains(top)
+                    || weights[i] < MIN_RATIO * weights[leadIndex]) {
                 continue;
             }
-            if (f.misfit() - lead.misfit() < MARGIN && !sharesFault(lead, f)) {
+            if (f.misfit() - lead.misfit() < MARGIN) {
                 rivals.add(f);
             }
         }
         String determined = determined(dm, target);
-        if (!rivals.isEmpty()) {
+        Fit none = noFault(fits);
+        boolean noFaultFits = none != null && none.misfit() - lead.misfit() < MARGIN;
+        if (!rivals.isEmpty() && (!noFaultFits || weights[leadIndex] >= WORTH_NAMING)) {
             List<String> names = new ArrayList<>();
             names.add(lead.hypothesis().label());
-            Set<String> seps = new LinkedHashSet<>();
+            List<Fault> involved = new ArrayList<>(lead.hypothesis().faults());
             boolean structural = true;
             double[] e0 = effect(dm, lead);
             for (Fit r : rivals) {
                 names.add(r.hypothesis().label());
                 structural &= cosine(e0, effect(dm, r)) > PARALLEL;
-                for (Fault a : lead.hypothesis().faults()) {
-                    for (Fault b : r.hypothesis().faults()) {
-                        seps.add(separatingMeasurement(dm.design.circuit(), a, b));
+                for (Fault b : r.hypothesis().faults()) {
+                    if (!involved.contains(b)) {
+                        involved.add(b);
                     }
                 }
             }
-            String separate = String.join("; or ", seps);
-            String text = "The measurement cannot tell " + orList(names) + " apart: "
-                    + (structural ? "they change the timing in the same proportions, so no precision would separate them"
+            String separate = separatingMeasurements(dm.design.circuit(), involved);
+            String text = "The measurement cannot tell these apart: " + String.join("; ", names) + ". "
+                    + capital(structural ? "they change the timing in the same proportions, so no precision would separate them"
                             : "each explains it within the measurement's uncertainty and the other parts' tolerances")
                     + ". " + capital(determined) + ". The order of the suspects comes from how often such parts fail,"
                     + " not from this measurement. To separate them: " + separate + ".";
             out.add(new Ambiguity(names, structural, determined, separate, text));
         }
-        Fit none = noFault(fits);
-        if (none != null && none.misfit() - lead.misfit() < MARGIN) {
+        if (noFaultFits) {
+            boolean wiper = false;
+            for (Coordinate c : dm.healthy) {
+                wiper |= c.logit();
+            }
             out.add(new Ambiguity(List.of(lead.hypothesis().label(), none.hypothesis().label()), false, determined,
-                    "a longer capture or the parts measured out of circuit",
-                    "The measurement is also explained with every part inside its band: " + determined
-                            + ", which the tolerances allow. Treat the suspects as leads, not findings."));
+                    "a longer capture, or the parts measured out of circuit",
+                    "The measurement is also explained with every part inside its band"
+                            + (wiper ? " (and the wiper where the fit puts it)" : ": " + determined
+                                    + ", which the tolerances allow")
+                            + ". Treat the suspects as leads, not findings."));
         }
         return out;
     }
 
-    private static boolean sharesFault(Fit a, Fit b) {
-        for (Fault f : a.hypothesis().faults()) {
-            if (b.hypothesis().faults().contains(f)) {
-                return true;
+    /** The fault with the largest summed probability over the explanations that include it, or null. */
+    static Fault topSuspect(DiagnosisModel dm, List<Fit> fits, double[] weights) {
+        Fault best = null;
+        double bestP = -1;
+        for (Fault f : dm.faults) {
+            double p = 0;
+            for (int i = 0; i < fits.size(); i++) {
+                if (fits.get(i).hypothesis().faults().contains(f)) {
+                    p += weights[i];
+                }
+            }
+            if (p > bestP) {
+                bestP = p;
+                best = f;
             }
         }
-        return false;
+        return best;
+    }
+
+    /** {@code "a, or b, or c"}. */
+    static String alternatives(List<String> names) {
+        return String.join(", or ", names);
     }
 
     private static Fit noFault(List<Fit> fits) {
@@ -220,33 +255,52 @@ final class Identifiability {
         }
     }
 
-    /** The extra measurement that separates fault {@code a} from fault {@code b}, in words. */
-    static String separatingMeasurement(CircuitSpec spec, Fault a, Fault b) {
-        if (a.kind() == FaultKind.FAMILY || b.kind() == FaultKind.FAMILY) {
-            return "read the marking on the timer chip (bipolar or CMOS family)";
+    /**
+     * The extra measurements that separate the given faults, in words: the parts out of circuit with
+     * the right meter, the capacitor's voltage for leakage, the control-pin voltage for a load on it,
+     * a second supply voltage for a diode drop, the chip's marking for the family.
+     */
+    static String separatingMeasurements(CircuitSpec spec, List<Fault> faults) {
+        List<String> ohms = new ArrayList<>();
+        List<String> farads = new ArrayList<>();
+        Set<String> other = new LinkedHashSet<>();
+        for (Fault f : faults) {
+            switch (f.kind()) {
+                case PART:
+                    var e = spec.element(f.name());
+                    (e != null && e.type() == ElementType.CAPACITOR ? farads : ohms).add(f.name());
+                    break;
+                case DIODE:
+                    other.add("repeat the capture at a second supply voltage (a diode drop's share of the timing changes"
+                            + " with the supply, a resistor's or capacitor's does not)");
+                    break;
+                case LEAKAGE:
+                    other.add("capture the timing capacitor's voltage on an analog channel (leakage makes it charge"
+                            + " toward a level below the supply), or measure its leakage current out of circuit");
+                    break;
+                case CONTROL_LOAD:
+                    other.add("measure the control-pin voltage to ground (about two thirds of the supply when nothing"
+                            + " loads it)");
+                    break;
+                default:
+                    other.add("read the marking on the timer chip (bipolar or CMOS family)");
+                    break;
+            }
         }
-        if (a.kind() == FaultKind.LEAKAGE || b.kind() == FaultKind.LEAKAGE) {
-            Fault leak = a.kind() == FaultKind.LEAKAGE ? a : b;
-            return "capture the timing capacitor's voltage on an analog channel (leakage makes it charge toward a level"
-                    + " below the supply), or measure " + leak.label().replace("leakage across ", "") + "'s leakage out of circuit";
+        List<String> all = new ArrayList<>();
+        if (!ohms.isEmpty() || !farads.isEmpty()) {
+            List<String> meters = new ArrayList<>();
+            if (!ohms.isEmpty()) {
+                meters.add(orList(ohms) + " with an ohmmeter");
+            }
+            if (!farads.isEmpty()) {
+                meters.add(orList(farads) + " with a capacitance meter");
+            }
+            all.add("measure " + String.join(" and ", meters)
+                    + " out of circuit (power off, capacitors discharged, one lead lifted)");
         }
-        if (a.kind() == FaultKind.CONTROL_LOAD || b.kind() == FaultKind.CONTROL_LOAD) {
-            return "measure the control-pin voltage to ground (about two thirds of the supply when nothing loads it)";
-        }
-        if (a.kind() == FaultKind.DIODE || b.kind() == FaultKind.DIODE) {
-            return "repeat the capture at a second supply voltage (a diode drop's share of the timing changes with the"
-                    + " supply, a resistor's or capacitor's does not)";
-        }
-        return "measure " + outOfCircuit(spec, a.name()) + " and " + outOfCircuit(spec, b.name())
-                + " out of circuit (power off and capacitors discharged, one lead lifted)";
-    }
-
-    private static String outOfCircuit(CircuitSpec spec, String designator) {
-        var e = spec.element(designator);
-        if (e == null) {
-            return designator;
-        }
-        return designator + (e.type() == ElementType.CAPACITOR ? " with a capacitance meter" : " with an ohmmeter");
+        all.addAll(other);
+        return String.join("; or ", all);
     }
 
     static String orList(List<String> names) {

@@ -9,8 +9,8 @@ import org.apache.commons.math3.special.Erf;
  * (Phi from Commons Math's {@link Erf}). Stateless.
  */
 final class Mixture {
-    /** Explanations lighter than this (relative to the total) are left out of a mixture. */
-    static final double MIN_WEIGHT = 1e-6;
+    /** Explanations lighter than this (relative to the total) are left out of a mixture: they cannot move a 2.5 % point. */
+    static final double MIN_WEIGHT = 1e-4;
 
     private Mixture() {
     }
@@ -48,7 +48,7 @@ final class Mixture {
     private static double quantile(double[] m, double[] s, double[] w, double total, double p, double lo, double hi) {
         double a = lo;
         double b = hi;
-        for (int it = 0; it < 60 && b - a > 1e-9; it++) {
+        for (int it = 0; it < 60 && b - a > 1e-6; it++) {
             double mid = 0.5 * (a + b);
             if (cdf(m, s, w, total, mid) < p) {
                 a = mid;

@@ -63,7 +63,7 @@ public record Observations(List<Observation> items, double clockRelativeUncertai
     }
 
     /** The probe clock's relative standard uncertainty in a measurement: its share of the frequency budget. */
-    static double clockShare(Measurement m) {
+    public static double clockShare(Measurement m) {
         Measurement.FrequencyEstimate f = m.frequency();
         double c = f.clockHz() / f.frequencyHz();
         return Double.isFinite(c) && c >= 0 ? c : 0;
