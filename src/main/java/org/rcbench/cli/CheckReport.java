@@ -10,6 +10,7 @@ import org.rcbench.diagnose.FaultKind;
 import org.rcbench.diagnose.QuantityCheck;
 import org.rcbench.diagnose.Suspect;
 import org.rcbench.diagnose.Words;
+import org.rcbench.units.SiFormat;
 import org.rcbench.units.Unit;
 import org.rcbench.units.ValueCode;
 
@@ -27,8 +28,8 @@ final class CheckReport {
     static String text(CheckResult r, String captureName) {
         StringBuilder sb = new StringBuilder();
         sb.append(r.verdict().name()).append("  ").append(r.design().title()).append(": ").append(r.reason()).append('\n');
-        sb.append(String.format(Locale.ROOT, "(capture %s, %d cycles; design %s)%n", captureName, r.measurement().cycles(),
-                r.design().source()));
+        sb.append(String.format(Locale.ROOT, "(capture %s, %d cycle%s; design %s)%n", captureName,
+                r.measurement().cycles(), r.measurement().cycles() == 1 ? "" : "s", r.design().source()));
         if (!r.checks().isEmpty()) {
             sb.append('\n');
             sb.append(String.format(Locale.ROOT, "%-12s %-24s %-12s %-24s %-24s %s%n", "", "measured", "nominal",
@@ -36,7 +37,7 @@ final class CheckReport {
             for (QuantityCheck c : r.checks()) {
                 TimingQuantity q = c.quantity();
                 String measured = Words.value(q, c.measured()) + (Double.isFinite(c.uncertainty())
-                        ? " ± " + Words.value(q, c.uncertainty()).replace(" %", " pts") : "");
+                        ? " ± " + uncertainty(q, c.uncertainty()) : "");
                 sb.append(String.format(Locale.ROOT, "%-12s %-24s %-12s %-24s %-24s %s%n", Words.name(q), measured,
                         Words.value(q, c.nominal()), Words.band(q, c.statistical()), Words.band(q, c.worstCase()),
                         c.status().fileName()));
@@ -76,6 +77,12 @@ final class CheckReport {
                 sb.append("  - ").append(a.text()).append('\n');
             }
         }
+    }
+
+    /** An expanded uncertainty with two significant digits; a duty's in percentage points. */
+    private static String uncertainty(TimingQuantity q, double u) {
+        return q == TimingQuantity.DUTY ? String.format(Locale.ROOT, "%.2g pts", u * 100)
+                : SiFormat.format(u, q.unit().symbol(), 2);
     }
 
     private static String value(Suspect s) {
