@@ -21,6 +21,9 @@ import picocli.CommandLine.Spec;
             CheckCommand.class,
             TuneCommand.class,
             EvidenceCommand.class,
+            HistoryCommand.class,
+            ReportCommand.class,
+            ExportCommand.class,
         })
 public final class RcbenchCommand implements Callable<Integer> {
     @Spec

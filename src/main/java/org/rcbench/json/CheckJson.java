@@ -14,6 +14,7 @@ import org.rcbench.diagnose.Suspect;
 import org.rcbench.diagnose.TuneResult;
 import org.rcbench.measure.FrequencyTrend;
 import org.rcbench.tolerance.Band;
+import org.rcbench.units.Tolerance;
 import org.rcbench.units.Unit;
 
 /**
@@ -27,12 +28,15 @@ import org.rcbench.units.Unit;
  * {@code measured}, {@code measured_u} (expanded, k = 2), {@code nominal}, {@code band} (the 95 %
  * statistical band as {@code [low, high]}), {@code worst_case} and {@code status};</li>
  * <li>{@code estimates}: per designator (and {@code VR1.wiper}) {@code value}, {@code unit},
- * {@code nominal}, {@code low}, {@code high} (95 %);</li>
+ * {@code nominal}, {@code low}, {@code high} (95 %), and for parts the design's
+ * {@code tolerance_minus} and {@code tolerance_plus} (fractions);</li>
  * <li>{@code suspects}: ordered, each {@code part}, {@code kind}, {@code label}, {@code value},
  * {@code unit}, {@code nominal}, {@code deviation} (fraction), {@code deviation_tolerances},
  * {@code probability}, {@code low}, {@code high};</li>
- * <li>{@code ambiguities}: array of plain-language strings; {@code diagnosis} (the summary line),
- * {@code no_fault_probability}, {@code fits_well}, {@code explanations} (label, probability, misfit);</li>
+ * <li>{@code ambiguities}: array of plain-language strings; {@code diagnosis}: an object with
+ * {@code summary} (the one-line finding), {@code no_fault_probability}, {@code fits_well} and
+ * {@code explanations} (label, probability, misfit), nested so that every top-level number stays a
+ * measurement;</li>
  * <li>{@code histogram}: {@code edges_s} and {@code counts}; {@code trend}: array of {@code t_s},
  * {@code frequency_hz}.</li>
  * </ul>
@@ -65,12 +69,20 @@ public final class CheckJson {
             q.put("status", c.status().fileName());
         }
         addDiagnosis(o, r.diagnosis());
+        for (Estimate e : r.diagnosis().estimates()) {
+            if (r.design().part(e.name()) != null) {
+                ObjectNode x = (ObjectNode) o.get("estimates").get(e.name());
+                Tolerance t = r.design().spread(e.name()).tolerance();
+                x.put("tolerance_minus", t.minusFraction());
+                x.put("tolerance_plus", t.plusFraction());
+            }
+        }
         histogram(o, r.histogram());
         trend(o, r.trend());
         return o;
     }
 
-    /** Adds {@code estimates}, {@code suspects}, {@code ambiguities} and the diagnosis summary keys to {@code o}. */
+    /** Adds {@code estimates}, {@code suspects}, {@code ambiguities} and the {@code diagnosis} object to {@code o}. */
     public static ObjectNode addDiagnosis(ObjectNode o, Diagnosis d) {
         ObjectNode est = o.putObject("estimates");
         for (Estimate e : d.estimates()) {
@@ -100,10 +112,11 @@ public final class CheckJson {
         for (Ambiguity a : d.ambiguities()) {
             amb.add(a.text());
         }
-        o.put("diagnosis", d.summary());
-        put(o, "no_fault_probability", d.noFaultProbability());
-        o.put("fits_well", d.fitsWell());
-        ArrayNode ex = o.putArray("explanations");
+        ObjectNode dx = o.putObject("diagnosis");
+        dx.put("summary", d.summary());
+        put(dx, "no_fault_probability", d.noFaultProbability());
+        dx.put("fits_well", d.fitsWell());
+        ArrayNode ex = dx.putArray("explanations");
         for (Explanation e : d.explanations()) {
             ObjectNode x = ex.addObject();
             x.put("label", e.label());

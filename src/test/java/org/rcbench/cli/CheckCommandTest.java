@@ -106,6 +106,12 @@ class CheckCommandTest {
         assertThat(j.get("histogram").get("edges_s").size()).isEqualTo(j.get("histogram").get("counts").size() + 1);
         assertThat(j.get("trend").get(0).has("t_s")).isTrue();
         assertThat(j.get("trend").get(0).has("frequency_hz")).isTrue();
+        assertThat(j.get("diagnosis").get("summary").asText()).contains("C1");
+        assertThat(j.get("estimates").get("C1").get("tolerance_plus").asDouble()).isCloseTo(0.05, within(1e-12));
+        // The history stage reads this document as it is (issue 4 keys); it must accept it whole.
+        var rows = org.rcbench.history.CheckDocument.parse(j);
+        assertThat(rows.verdict()).isEqualTo("fail");
+        assertThat(rows.suspects().get(0).part()).isEqualTo("C1");
     }
 
     @Test
