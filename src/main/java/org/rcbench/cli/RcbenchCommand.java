@@ -16,6 +16,7 @@ import picocli.CommandLine.Spec;
             MeasureCommand.class,
             BenchCommand.class,
             PortsCommand.class,
+            GuiCommand.class,
         })
 public final class RcbenchCommand implements Callable<Integer> {
     @Spec
