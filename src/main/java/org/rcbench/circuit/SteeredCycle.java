@@ -33,7 +33,7 @@ final class SteeredCycle {
         double delay = p[m.iDelay];
 
         double rCharge = rTop + rChargeExtra;
-        double vd1 = Diodes.effectiveSeriesDrop(law1, d1, rCharge, vs - lower, vs - upper);
+        double vd1 = Diodes.effectiveSeriesDrop(law1, d1, Math.max(rCharge, 1e-3), vs - lower, vs - upper);
         double rC = rCharge + law1.seriesOhms();
         double gC = 1 / rC + gLeak;
         double vInfC = ((vs - vd1) / rC - iIn) / gC;
@@ -53,8 +53,9 @@ final class SteeredCycle {
             vPin = rPin * (vs / rTop + p[m.iSat] / ron);
         }
         double rDis = rDischarge + rPin;
-        double vd2 = rDis > 0 ? Diodes.effectiveSeriesDrop(law2, d2, rDis, upper - vPin, lower - vPin)
-                : Diodes.dropForLinearCurrent(law2, d2, 1, 0);
+        // A path with no resistance outside the diode (wiper at the end of its track) is limited by the
+        // diode's own series resistance; a milliohm floor keeps the drop calculation finite.
+        double vd2 = Diodes.effectiveSeriesDrop(law2, d2, Math.max(rDis, 1e-3), upper - vPin, lower - vPin);
         double rD = rDis + law2.seriesOhms();
         double vInfD;
         double tauD;

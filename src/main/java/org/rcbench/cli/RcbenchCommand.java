@@ -16,6 +16,8 @@ import picocli.CommandLine.Spec;
             MeasureCommand.class,
             BenchCommand.class,
             PortsCommand.class,
+            PredictCommand.class,
+            DesignCommand.class,
             GuiCommand.class,
         })
 public final class RcbenchCommand implements Callable<Integer> {

@@ -19,7 +19,8 @@ import org.rcbench.testing.ExternalTool;
  * leakage across the timing capacitor and with a control-pin load, for the bipolar family and
  * (plain) the CMOS family: predicted high and low times agree within 0.5 % with ideal fixed-drop
  * diodes, and within 2 % with SPICE's junction diode using the parts' Shockley parameters. The
- * latch in SPICE has no delay, so the family's delay is set to 0 here.
+ * latch in SPICE has no delay, so the family's delay is set to 0 except in the cases that check it
+ * (2 µs through an ideal delay line in SPICE).
  */
 class NgspiceAgreementTest {
     private static final double[] SUPPLIES = {5, 9, 12, 15};
@@ -131,6 +132,13 @@ class NgspiceAgreementTest {
             for (CircuitSpec s : topologies(vs, bipolar, false)) {
                 addVariants(out, s, true);
             }
+            // Propagation delay of 2 us on cycles of about 100 us: a 2 % effect, checked to 0.5 %.
+            for (CircuitSpec s : topologies(vs, bipolar.withDelaySeconds(2e-6), false)) {
+                if (s.topology() == Topology.ASTABLE || s.topology() == Topology.MONOSTABLE
+                        || s.topology() == Topology.OUTPUT_FED || s.topology() == Topology.ASTABLE_TWO_DIODE) {
+                    add(out, s, "delay 2 us", null, 0, false, 0.005);
+                }
+            }
             if (vs == 5 || vs == 15) {
                 for (CircuitSpec s : topologies(vs, cmos, false)) {
                     add(out, s, "plain", null, 0, false, 0.005);
@@ -141,6 +149,9 @@ class NgspiceAgreementTest {
                     continue;
                 }
                 add(out, s, "real-diode", null, 0, true, 0.02);
+                if (vs == 9) {
+                    add(out, s, "real-diode leak", ParameterTable.LEAK, 150e3, true, 0.02);
+                }
                 add(out, withControlLoad(s, 22e3), "real-diode control-load", null, 0, true, 0.02);
             }
         }

@@ -14,9 +14,10 @@ import java.util.Locale;
  * transistor as a switch to a saturation source, the output as a behavioural Thevenin source, leakage
  * as a resistor, the input current as a current source, and diodes either as an ideal fixed-drop
  * behavioural element ({@code I = max(V - Vd, 0) / 0.1 Ω}) or as SPICE's junction diode with the
- * Shockley parameters of the part's {@link DiodeLaw}. The latch has no propagation delay, so specs
- * checked here use a zero delay. Measurements: edges of the latch state {@code st} (high = discharging),
- * one full cycle after the first.
+ * Shockley parameters of the part's {@link DiodeLaw}. The latch itself has no propagation delay, so specs
+ * checked here use a zero delay unless they test the delay, which is then an ideal delay line between
+ * the latch and the discharge switch and output. Measurements: edges of the latch state {@code st} (high = discharging),
+ * one full cycle after the first, on the delayed state {@code sd} (the output).
  */
 final class SpiceNetlist {
     /** Ideal-diode on-resistance in the fixed-drop model (Ω); 0.5 mA through it is 50 µV. */
@@ -86,7 +87,7 @@ final class SpiceNetlist {
             line(sb, "ITH cap 0 DC %s", num(iIn));
         }
         String trg = spec.topology() == Topology.MONOSTABLE ? "trg" : "cap";
-        latch(sb, thr, trg);
+        latch(sb, thr, trg, p[t.index(ParameterTable.DELAY)]);
         output(sb, m, p);
         return sb.toString();
     }
@@ -123,16 +124,26 @@ final class SpiceNetlist {
      * the wrong state (a switch with hysteresis did, when a step was redone). The comparator terms
      * rise from 0 to 1 over ±0.05 mV around each crossing.
      */
-    static void latch(StringBuilder sb, String thr, String trg) {
+    static void latch(StringBuilder sb, String thr, String trg, double delay) {
         line(sb, "CST st 0 1p IC=0");
         line(sb, "BST 0 st I = 1e-3*(min(max(1e4*(v(%s)-v(ctl))+0.5,0),1)*(1-v(st))"
                 + " - min(max(1e4*(v(tref)-v(%s))+0.5,0),1)*v(st))", thr, trg);
+        // The state reaches the discharge switch and the output as node sd: through an ideal delay line
+        // (a matched lossless transmission line) when the family has a propagation delay.
+        if (delay > 0) {
+            line(sb, "EBUF sti 0 st 0 2");
+            line(sb, "RSRC sti stl 50");
+            line(sb, "TDLY stl 0 sd 0 Z0=50 TD=%s", num(delay));
+            line(sb, "RTRM sd 0 50");
+        } else {
+            line(sb, "EBUF sd 0 st 0 1");
+        }
     }
 
     private static void discharge(StringBuilder sb, TimerModel m, double[] p, String node) {
         ParameterTable t = m.parameters();
         line(sb, "VSAT dsat 0 DC %s", num(p[t.index(ParameterTable.SAT)]));
-        line(sb, "S2 %s dsat st 0 SDIS", node);
+        line(sb, "S2 %s dsat sd 0 SDIS", node);
         // Directly on the capacitor (monostable) an on-resistance under 1 Ω makes ngspice's switches chatter;
         // 1 Ω against the 100 kΩ timing resistor moves the idle voltage by under 0.1 mV.
         double floor = node.equals("cap") ? 1 : 1e-3;
@@ -146,7 +157,7 @@ final class SpiceNetlist {
         double rh = Math.max(p[t.index(ParameterTable.HIGH_OHMS)], 1e-3);
         double vl = p[t.index(ParameterTable.LOW_VOLTS)];
         double rl = Math.max(p[t.index(ParameterTable.LOW_OHMS)], 1e-3);
-        line(sb, "BOUT 0 out I = v(st) > 0.5 ? (%s - v(out))/%s : (%s - v(out))/%s", num(vl), num(rl), num(vh), num(rh));
+        line(sb, "BOUT 0 out I = v(sd) > 0.5 ? (%s - v(out))/%s : (%s - v(out))/%s", num(vl), num(rl), num(vh), num(rh));
         int k = 0;
         for (Element e : m.spec().withRole(Role.OUTPUT_LOAD)) {
             line(sb, "RLD%d out 0 %s", k++, num(p[t.index(e.designator())]));
@@ -175,11 +186,11 @@ final class SpiceNetlist {
     static String astableControl(double stopSeconds, double maxStep) {
         return String.format(Locale.ROOT, ".control%nset noaskquit%nset numdgt=12%n"
                 + "tran %s %s 0 %s uic%n"
-                + "meas tran ra when v(st)=0.5 rise=2%n"
-                + "meas tran fb when v(st)=0.5 fall=2%n"
-                + "meas tran rc when v(st)=0.5 rise=3%n"
-                + "meas tran fa when v(st)=0.5 fall=1%n"
-                + "meas tran r1 when v(st)=0.5 rise=1%n"
+                + "meas tran ra when v(sd)=0.5 rise=2%n"
+                + "meas tran fb when v(sd)=0.5 fall=2%n"
+                + "meas tran rc when v(sd)=0.5 rise=3%n"
+                + "meas tran fa when v(sd)=0.5 fall=1%n"
+                + "meas tran r1 when v(sd)=0.5 rise=1%n"
                 + "let high = rc - fb%nlet low = fb - ra%nlet first = r1%n"
                 + "print high low first%nquit%n.endc%n.end%n", num(maxStep), num(stopSeconds), num(maxStep));
     }
@@ -193,9 +204,9 @@ final class SpiceNetlist {
         return String.format(Locale.ROOT, "VTRG trg 0 PWL(0 %s %s %s %s 0 %s 0 %s %s)%n"
                 + ".control%nset noaskquit%nset numdgt=12%n"
                 + "tran %s %s 0 %s uic%n"
-                + "meas tran fa when v(st)=0.5 fall=1%n"
-                + "meas tran rb when v(st)=0.5 rise=2%n"
-                + "meas tran r1 when v(st)=0.5 rise=1%n"
+                + "meas tran fa when v(sd)=0.5 fall=1%n"
+                + "meas tran rb when v(sd)=0.5 rise=2%n"
+                + "meas tran r1 when v(sd)=0.5 rise=1%n"
                 + "meas tran ta when v(trg)=v(tref) fall=1%n"
                 + "let pulse = rb - fa%nlet first = r1%n"
                 + "print pulse first%nquit%n.endc%n.end%n",
@@ -211,14 +222,14 @@ final class SpiceNetlist {
     static String bistable(TimerModel m, double[] p) {
         StringBuilder sb = header(m, p);
         double vs = p[m.parameters().index(ParameterTable.SUPPLY)];
-        latch(sb, "thr", "trg");
+        latch(sb, "thr", "trg", 0);
         output(sb, m, p);
         line(sb, "VTHR thr 0 PWL(0 %s 0.1m %s 0.1001m 0 1.4m 0 2.4m %s)", num(vs), num(vs), num(vs));
         line(sb, "VTRG trg 0 PWL(0 %s 0.2m %s 1.2m 0 1.3m 0 1.3001m %s)", num(vs), num(vs), num(vs));
         sb.append(String.format(Locale.ROOT, ".control%nset noaskquit%nset numdgt=12%n"
                 + "tran 100n 2.5m 0 100n uic%n"
-                + "meas tran tset when v(st)=0.5 fall=1%n"
-                + "meas tran tclr when v(st)=0.5 td=1.3m rise=1%n"
+                + "meas tran tset when v(sd)=0.5 fall=1%n"
+                + "meas tran tclr when v(sd)=0.5 td=1.3m rise=1%n"
                 + "meas tran vset find v(trg) at=tset%n"
                 + "meas tran vclr find v(thr) at=tclr%n"
                 + "print vset vclr%nquit%n.endc%n.end%n"));
