@@ -52,10 +52,11 @@ public final class BenchModel implements AutoCloseable {
     private final ReadOnlyStringWrapper signalNote = new ReadOnlyStringWrapper(this, "signalNote", "");
     private final ReadOnlyBooleanWrapper safetyNoticeDue = new ReadOnlyBooleanWrapper(this, "safetyNoticeDue");
 
-    private LiveSource source;
+    private BenchSource source;
     private LivePipeline pipeline;
     private Path recordingFile;
     private Path lastRecording;
+    private Design sourceDesign;
     private Expectation shownExpectation;
     private boolean readoutDirty = true;
     private long lastReadout = Long.MIN_VALUE / 2;
@@ -170,7 +171,7 @@ public final class BenchModel implements AutoCloseable {
             return;
         }
         SourceChoice c = choice.get();
-        LiveSource s;
+        BenchSource s;
         try {
             s = services.sources().open(c);
         } catch (BadInputException e) {
@@ -178,8 +179,10 @@ public final class BenchModel implements AutoCloseable {
             message.set("cannot start the " + c.kind().words() + ": " + e.getMessage());
             return;
         }
-        if (c.kind() == SourceChoice.Kind.SIMULATED && !c.target().isEmpty() && design.design() == null) {
-            design.load(Path.of(c.target()));
+        if (s.design() != null && (design.design() == null || design.design() == sourceDesign)) {
+            // Compare with the simulated board's design, unless the user has loaded or edited one.
+            sourceDesign = s.design();
+            design.use(sourceDesign);
         }
         LivePipeline p = new LivePipeline(0, publishNanos);
         p.setRollingCycles(rollingFor(averaging.get()));
@@ -198,7 +201,7 @@ public final class BenchModel implements AutoCloseable {
         if (recording.get()) {
             stopRecording();
         }
-        LiveSource s = source;
+        BenchSource s = source;
         source = null;
         if (s != null) {
             s.stop();

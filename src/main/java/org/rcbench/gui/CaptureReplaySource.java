@@ -16,7 +16,7 @@ import org.rcbench.edge.Timebase;
  * it is more than two milliseconds ahead, so at high edge rates edges arrive in small bursts.
  * Thread-safe; one reader thread per start.
  */
-public final class CaptureReplaySource implements LiveSource {
+public final class CaptureReplaySource implements BenchSource {
     private static final long AHEAD_NANOS = 2_000_000L;
     private static final long STATUS_NANOS = 250_000_000L;
 

@@ -16,7 +16,7 @@ import org.rcbench.protocol.ProbeEvents;
  * clock, session status snapshots become {@link org.rcbench.gui.SourceStatus}, and the session's
  * own reader thread feeds the sink. Thread-safe.
  */
-public final class SessionSource implements LiveSource {
+public final class SessionSource implements BenchSource {
 
     /** Makes the (not yet started) session that will feed {@code sink} and {@code events}. */
     @FunctionalInterface

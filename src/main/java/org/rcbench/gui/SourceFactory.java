@@ -9,5 +9,5 @@ public interface SourceFactory {
      * @throws org.rcbench.common.BadInputException when the choice cannot be made into a source
      *                                              (a fault that does not read, a missing design)
      */
-    LiveSource open(SourceChoice choice);
+    BenchSource open(SourceChoice choice);
 }

@@ -5,7 +5,7 @@ import org.rcbench.edge.EdgeSink;
 import org.rcbench.edge.Timebase;
 
 /**
- * What a {@link LiveSource} feeds: the clock once it is known (always before the first edge of a
+ * What a {@link BenchSource} feeds: the clock once it is known (always before the first edge of a
  * connection), the edges and gaps, the end, and status snapshots. Every call comes from the
  * source's own thread; implementations must not block it.
  */

@@ -36,7 +36,7 @@ final class DesignPane extends VBox {
         this.model = model;
         getStyleClass().add("design-pane");
         setPadding(new Insets(10));
-        setPrefWidth(470);
+        setPrefWidth(456);
 
         Label heading = new Label("Board design");
         heading.getStyleClass().add("pane-heading");
@@ -53,7 +53,7 @@ final class DesignPane extends VBox {
         table.setHgap(6);
         table.setVgap(4);
         table.getStyleClass().add("parts-table");
-        double[] widths = {38, 100, 112, 70, 58, 48};
+        double[] widths = {38, 92, 104, 70, 58, 44};
         for (double w : widths) {
             javafx.scene.layout.ColumnConstraints c = new javafx.scene.layout.ColumnConstraints();
             c.setMinWidth(w);
@@ -92,7 +92,7 @@ final class DesignPane extends VBox {
 
     private void rebuild() {
         table.getChildren().clear();
-        String[] heads = {"Part", "Role", "Kind", "Value", "Tolerance", "Wiper"};
+        String[] heads = {"Part", "Role", "Kind", "Value", "Tol.", "Wiper"};
         for (int c = 0; c < heads.length; c++) {
             Label h = new Label(heads[c]);
             h.getStyleClass().add("table-head");

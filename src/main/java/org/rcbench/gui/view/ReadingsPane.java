@@ -69,7 +69,7 @@ final class ReadingsPane extends VBox {
         tiles.getChildren().clear();
         for (Reading r : model.readings().readings()) {
             ReadingTile t = new ReadingTile(r);
-            t.setPrefWidth(205);
+            t.setPrefWidth(192);
             tiles.getChildren().add(t);
         }
     }
