@@ -38,6 +38,7 @@ public final class BenchModel implements AutoCloseable {
     private final DesignModel design;
     private final DiagnosisModel diagnosis;
     private final TuningModel tuning;
+    private final PickerModel picker;
 
     private final ReadOnlyObjectWrapper<SourceChoice> choice = new ReadOnlyObjectWrapper<>(this, "choice",
             SourceChoice.simulated("", ""));
@@ -73,6 +74,7 @@ public final class BenchModel implements AutoCloseable {
         this.design = new DesignModel(services.expectations(), services.worker());
         this.diagnosis = new DiagnosisModel(services.diagnosis(), services.worker());
         this.tuning = new TuningModel(services.tuning(), services.worker());
+        this.picker = new PickerModel(design, services.worker());
         safetyNoticeDue.set(!settings.safetyNoticeAccepted());
         design.designProperty().addListener((o, was, now) -> designChanged(now));
     }
@@ -93,6 +95,10 @@ public final class BenchModel implements AutoCloseable {
 
     public TuningModel tuning() {
         return tuning;
+    }
+
+    public PickerModel picker() {
+        return picker;
     }
 
     // ---- properties ----------------------------------------------------------------------------
@@ -240,6 +246,16 @@ public final class BenchModel implements AutoCloseable {
         }
     }
 
+    /** Saves the design in use (with its edits) to {@code file}. */
+    public void saveDesign(Path file) {
+        try {
+            design.save(file);
+            message.set("design saved to " + file);
+        } catch (BadInputException e) {
+            message.set("design not saved: " + e.getMessage());
+        }
+    }
+
     /** Starts recording every edge to {@code file} (which must not exist). */
     public void startRecording(Path file) {
         if (recording.get()) {
@@ -344,6 +360,7 @@ public final class BenchModel implements AutoCloseable {
         }
         diagnosis.poll();
         tuning.poll();
+        picker.poll();
         if (readoutDirty && nowNanos - lastReadout >= READOUT_NANOS) {
             readings.update(frame.get(), shownExpectation, averaging.get());
             readoutDirty = false;

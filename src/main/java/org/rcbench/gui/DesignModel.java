@@ -97,6 +97,24 @@ public final class DesignModel {
         }
     }
 
+    /**
+     * Writes the design in use, with every edit, to {@code file} as a design file.
+     *
+     * @throws BadInputException naming the file when it cannot be written
+     */
+    public void save(Path file) {
+        Design d = design.get();
+        if (d == null) {
+            throw new BadInputException(file.toString(), "no design to save");
+        }
+        try {
+            java.nio.file.Files.writeString(file, org.rcbench.design.DesignText.toToml(d),
+                    java.nio.charset.StandardCharsets.UTF_8);
+        } catch (java.io.IOException e) {
+            throw new BadInputException(file.toString(), "cannot write: " + e.getMessage(), e);
+        }
+    }
+
     /** Uses {@code d} as loaded (not edited). */
     public void use(Design d) {
         edited = false;
@@ -132,6 +150,12 @@ public final class DesignModel {
             row.setProblem(why);
             problem.set(designator + " " + field.name().toLowerCase(java.util.Locale.ROOT) + ": " + why);
         }
+    }
+
+    /** Marks the design in use as changed from its file (after taking a picked part set). */
+    void markEdited() {
+        edited = true;
+        setDesign(design.get());
     }
 
     /** Applies a finished expectation run; call once per frame on the window's thread. */

@@ -47,7 +47,23 @@ final class DesignPane extends VBox {
         Button open = new Button("Open design…");
         open.setId("open-design");
         open.setOnAction(e -> openDesign());
-        HBox buttons = new HBox(8, open);
+        Button pick = new Button("Find parts…");
+        pick.setId("find-parts");
+        pick.disableProperty().bind(model.design().designProperty().isNull());
+        pick.setOnAction(e -> PickerDialog.show(getScene().getWindow(), model));
+        Button save = new Button("Save as…");
+        save.setId("save-design");
+        save.disableProperty().bind(model.design().designProperty().isNull());
+        save.setOnAction(e -> {
+            FileChooser chooser = new FileChooser();
+            chooser.setTitle("Save the design");
+            chooser.getExtensionFilters().add(new FileChooser.ExtensionFilter("rcbench designs", "*.toml"));
+            File f = chooser.showSaveDialog(getScene().getWindow());
+            if (f != null) {
+                model.saveDesign(f.toPath());
+            }
+        });
+        HBox buttons = new HBox(8, open, pick, save);
 
         table.setId("parts-table");
         table.setHgap(6);
