@@ -372,6 +372,11 @@ public final class BenchModel implements AutoCloseable {
         tuning.maybeRun(nowNanos, design.design(), frame.get());
     }
 
+    /** The running pipeline, or null before the first start (for benchmarks and tests). */
+    public LivePipeline pipeline() {
+        return pipeline;
+    }
+
     /** Stops the source and any recording. */
     @Override
     public void close() {

@@ -41,6 +41,7 @@ public final class LivePipeline implements SourceSink {
     private volatile Map<Integer, String> channelNames = Map.of();
     private volatile int channel;
     private volatile boolean recorderMayBeSet;
+    private volatile long publishCostNanos;
     private Recorder recorder; // guarded by recordLock
 
     // Source thread only.
@@ -148,6 +149,7 @@ public final class LivePipeline implements SourceSink {
         frame.set(new LiveFrame(++serial, meter.config().timebase(), meter.snapshot(Math.min(window, capacity)),
                 Math.min(window, capacity), start, high, low, n, meter.trend(), Steadiness.steady(high, low, n, window),
                 latestTick, now, ended));
+        publishCostNanos = System.nanoTime() - now;
     }
 
     // ---- any thread ------------------------------------------------------------------------------
@@ -155,6 +157,11 @@ public final class LivePipeline implements SourceSink {
     /** The newest frame, or null before the first; frames never go back in {@link LiveFrame#serial()}. */
     public LiveFrame latestFrame() {
         return frame.get();
+    }
+
+    /** How long building the newest frame took on the source's thread, ns (for benchmarks). */
+    public long publishCostNanos() {
+        return publishCostNanos;
     }
 
     /** The source's newest status. */

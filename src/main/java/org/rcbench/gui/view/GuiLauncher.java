@@ -115,7 +115,7 @@ public final class GuiLauncher {
      *
      * @throws BadInputException when there is no display to open a window on
      */
-    static void startToolkit(boolean headless) throws InterruptedException {
+    public static void startToolkit(boolean headless) throws InterruptedException {
         if (headless) {
             System.setProperty("glass.platform", "Monocle");
             System.setProperty("monocle.platform", "Headless");
@@ -138,11 +138,12 @@ public final class GuiLauncher {
 
     /** Work done on the JavaFX thread. */
     @FunctionalInterface
-    interface FxWork<T> {
+    public interface FxWork<T> {
         T run() throws Exception;
     }
 
-    static <T> CompletableFuture<T> onFxThread(FxWork<T> work) {
+    /** Runs {@code work} on the JavaFX thread; the future completes with its result or failure. */
+    public static <T> CompletableFuture<T> onFxThread(FxWork<T> work) {
         CompletableFuture<T> f = new CompletableFuture<>();
         Platform.runLater(() -> {
             try {

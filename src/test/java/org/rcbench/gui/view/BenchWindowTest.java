@@ -176,6 +176,25 @@ class BenchWindowTest {
     }
 
     @Test
+    void thePartPickerTakesACandidateIntoTheDesign(FxRobot robot) throws Exception {
+        WaitForAsyncUtils.asyncFx(() -> model.loadDesign(PIPER)).get(5, TimeUnit.SECONDS);
+        robot.clickOn("#find-parts");
+        waitUntil(() -> robot.lookup("#picker").tryQuery().isPresent(), 5);
+        robot.clickOn("#pick-frequency").write("1 kHz");
+        robot.clickOn("#pick-duty").write("60 %");
+        robot.clickOn("#pick-find");
+        waitUntil(() -> !model.picker().options().isEmpty(), 30);
+        var first = model.picker().options().get(0);
+        robot.clickOn(robot.lookup("#pick-options .list-cell").nth(0).queryAs(javafx.scene.Node.class));
+        robot.clickOn("#pick-use");
+        waitUntil(() -> model.design().titleProperty().get().contains("(edited)"), 5);
+        Design picked = first.candidate().design();
+        assertThat(model.design().design().part("C1").value()).isEqualTo(picked.part("C1").value());
+        assertThat(robot.lookup("#value-C1").queryAs(TextField.class).getText()).isNotEmpty();
+        robot.clickOn("Close");
+    }
+
+    @Test
     void theHelpMenuShowsTheSafetyNotice(FxRobot robot) throws Exception {
         robot.clickOn("Help").clickOn("Safety notice");
         waitUntil(() -> robot.lookup("#safety-notice").tryQuery().isPresent(), 5);
