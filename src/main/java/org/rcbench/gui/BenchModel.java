@@ -368,7 +368,7 @@ public final class BenchModel implements AutoCloseable {
             refreshRecording(p);
         }
         signalNote.set(quietNote(nowNanos));
-        diagnosis.maybeRun(nowNanos, design.design(), frame.get());
+        diagnosis.maybeRun(nowNanos, design.design(), frame.get(), averaging.get());
         tuning.maybeRun(nowNanos, design.design(), frame.get());
     }
 

@@ -8,7 +8,6 @@ import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 import org.rcbench.design.Design;
-import org.rcbench.measure.Measurement;
 
 /**
  * The suspects panel: the verdict, the ranked suspects with estimates and intervals, what the data
@@ -71,7 +70,7 @@ public final class DiagnosisModel {
     }
 
     /** Starts a diagnosis of {@code frame} against {@code design} when one is due. */
-    void maybeRun(long now, Design design, LiveFrame frame) {
+    void maybeRun(long now, Design design, LiveFrame frame, int averaging) {
         if (source == null) {
             return;
         }
@@ -86,8 +85,8 @@ public final class DiagnosisModel {
         if (frame.serial() == lastSerial || now - lastRun < INTERVAL_NANOS) {
             return;
         }
-        Measurement m = frame.measurement();
-        if (slot.offer(() -> source.diagnose(design, m))) {
+        Observed o = Observed.of(frame, averaging);
+        if (slot.offer(() -> source.diagnose(design, o))) {
             lastRun = now;
             lastSerial = frame.serial();
         }

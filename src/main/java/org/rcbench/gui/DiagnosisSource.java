@@ -1,7 +1,6 @@
 package org.rcbench.gui;
 
 import org.rcbench.design.Design;
-import org.rcbench.measure.Measurement;
 
 /**
  * Names the drifted part from a measurement and a design. Called off the window's thread a few
@@ -10,10 +9,10 @@ import org.rcbench.measure.Measurement;
 @FunctionalInterface
 public interface DiagnosisSource {
     /**
-     * What {@code measurement} says about {@code design}'s parts; never null.
+     * What the timing {@code observed} says about {@code design}'s parts; never null.
      *
      * @throws IllegalArgumentException or {@link org.rcbench.common.BadInputException} when this
      *                                  design cannot be diagnosed (the panel shows the message)
      */
-    Findings diagnose(Design design, Measurement measurement);
+    Findings diagnose(Design design, Observed observed);
 }

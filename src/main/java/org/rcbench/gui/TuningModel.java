@@ -27,6 +27,8 @@ import org.rcbench.units.ValueCode;
 public final class TuningModel {
     /** Time between tuning solutions: as often as the readings refresh. */
     static final long INTERVAL_NANOS = 100_000_000L;
+    /** The guide follows the newest this many cycles, so it keeps up with a hand on the knob. */
+    public static final int WINDOW_CYCLES = 64;
 
     private final TuningSource source;
     private final BackgroundSlot<TuningAdvice> slot;
@@ -175,7 +177,8 @@ public final class TuningModel {
         }
         TimingQuantity q = quantity.get();
         double t = target;
-        if (slot.offer(() -> source.tune(design, frame.measurement(), q, t))) {
+        Observed o = Observed.of(frame, WINDOW_CYCLES);
+        if (slot.offer(() -> source.tune(design, o, q, t))) {
             lastRun = now;
             lastSerial = frame.serial();
         }

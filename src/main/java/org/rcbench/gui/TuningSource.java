@@ -2,7 +2,6 @@ package org.rcbench.gui;
 
 import org.rcbench.circuit.TimingQuantity;
 import org.rcbench.design.Design;
-import org.rcbench.measure.Measurement;
 
 /**
  * Finds where a potentiometer's wiper is and where it must go. Called off the window's thread
@@ -11,8 +10,9 @@ import org.rcbench.measure.Measurement;
 @FunctionalInterface
 public interface TuningSource {
     /**
-     * Where the wiper of {@code design}'s potentiometer is, judged from {@code measurement}, and
-     * where it must be for {@code quantity} to read {@code target} (its unit; duty as a fraction).
+     * Where the wiper of {@code design}'s potentiometer is, judged from {@code observed}, and where
+     * it must be for {@code quantity} to read {@code target} (its unit; duty as a fraction; NaN when
+     * no target is given: then only the present position matters).
      */
-    TuningAdvice tune(Design design, Measurement measurement, TimingQuantity quantity, double target);
+    TuningAdvice tune(Design design, Observed observed, TimingQuantity quantity, double target);
 }
