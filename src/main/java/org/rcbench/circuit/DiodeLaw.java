@@ -59,7 +59,7 @@ public record DiodeLaw(boolean currentDependent, double emission, double seriesO
     /** The saturation current Is (A) that gives {@code dropAt1mA} at 1 mA. */
     public double saturationAmps(double dropAt1mA) {
         double nvt = emission * THERMAL_VOLTS;
-        return REFERENCE_AMPS / Math.expm1((dropAt1mA - REFERENCE_AMPS * seriesOhms) / nvt);
+        return REFERENCE_AMPS / (Math.exp((dropAt1mA - REFERENCE_AMPS * seriesOhms) / nvt) - 1);
     }
 
     /** The forward drop (V) at current {@code amps} for a diode whose drop at 1 mA is {@code dropAt1mA}. */

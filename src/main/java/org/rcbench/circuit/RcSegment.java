@@ -16,8 +16,8 @@ public final class RcSegment {
      * beyond {@code v1} (the capacitor never gets there). 0 when {@code v0 == v1}. A zero {@code tau}
      * (no resistance) gives 0 whenever {@code v1} is reachable.
      *
-     * <p>Computed as {@code tau * log1p((v1 - v0) / (vInf - v1))}, which equals the law above and
-     * keeps precision when the step is small.
+     * <p>Computed as {@code tau * ln(1 + (v1 - v0) / (vInf - v1))}, which equals the law above, with
+     * {@code log1p} for small steps to keep precision.
      */
     public static double time(double tau, double vInf, double v0, double v1) {
         if (v0 == v1) {
@@ -32,7 +32,9 @@ public final class RcSegment {
         if (tau == 0) {
             return 0;
         }
-        return tau * Math.log1p(step / remaining);
+        double x = step / remaining;
+        // log1p keeps precision for small steps; Math.log of the ratio is much faster otherwise.
+        return tau * (Math.abs(x) < 1e-3 ? Math.log1p(x) : Math.log(1 + x));
     }
 
     /** The voltage after {@code t} seconds starting from {@code v0}. A zero {@code tau} jumps to {@code vInf}. */

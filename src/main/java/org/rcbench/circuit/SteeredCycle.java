@@ -33,12 +33,30 @@ final class SteeredCycle {
         double delay = p[m.iDelay];
 
         double rCharge = rTop + rChargeExtra;
-        double vd1 = Diodes.effectiveSeriesDrop(law1, d1, Math.max(rCharge, 1e-3), vs - lower, vs - upper);
+        // Current-dependent D1: drops at the charge segment's ends (from the lower threshold, and from
+        // 0 V for the first cycle, both to the upper threshold), each path solved once.
+        double vd1;
+        double vd1First = Double.NaN;
+        double rCalc = Math.max(rCharge, 1e-3);
+        if (law1.currentDependent()) {
+            double nvt = Diodes.nvt(law1);
+            double is = law1.saturationAmps(d1);
+            double rs = law1.seriesOhms();
+            double uLow = vs - lower;
+            double uHigh = vs - upper;
+            double atUpper = Diodes.solve(nvt, is, rs, Math.max(uHigh, 0) / rCalc, 1 / rCalc);
+            vd1 = Diodes.effective(nvt, is, rs, rCalc, uLow, Diodes.solve(nvt, is, rs, uLow / rCalc, 1 / rCalc),
+                    uHigh, atUpper);
+            vd1First = Diodes.effective(nvt, is, rs, rCalc, vs, Diodes.solve(nvt, is, rs, vs / rCalc, 1 / rCalc),
+                    uHigh, atUpper);
+        } else {
+            vd1 = d1;
+        }
         double rC = rCharge + law1.seriesOhms();
         double gC = 1 / rC + gLeak;
         double vInfC = ((vs - vd1) / rC - iIn) / gC;
         if (!(vInfC > upper)) {
-            TimerModel.stopCharging(out, vs - (Double.isNaN(vd1) ? d1 : vd1), rC, iIn, vInfC, upper);
+            TimerModel.stopCharging(out, vs - vd1, rC, iIn, vInfC, upper);
             return;
         }
 
@@ -56,6 +74,9 @@ final class SteeredCycle {
         // A path with no resistance outside the diode (wiper at the end of its track) is limited by the
         // diode's own series resistance; a milliohm floor keeps the drop calculation finite.
         double vd2 = Diodes.effectiveSeriesDrop(law2, d2, Math.max(rDis, 1e-3), upper - vPin, lower - vPin);
+        if (Double.isNaN(vd2)) {
+            vd2 = d2;
+        }
         double rD = rDis + law2.seriesOhms();
         double vInfD;
         double tauD;
@@ -73,8 +94,7 @@ final class SteeredCycle {
         }
         TimerModel.cycle(out, c / gC, vInfC, tauD, vInfD, delay);
         if (law1.currentDependent()) {
-            double vdFirst = Diodes.effectiveSeriesDrop(law1, d1, rCharge, vs, vs - upper);
-            double vInfFirst = ((vs - vdFirst) / rC - iIn) / gC;
+            double vInfFirst = ((vs - vd1First) / rC - iIn) / gC;
             out.firstHighSeconds = delay + RcSegment.time(c / gC, vInfFirst, 0, upper);
         }
     }

@@ -18,6 +18,9 @@ import picocli.CommandLine.Spec;
             PortsCommand.class,
             PredictCommand.class,
             DesignCommand.class,
+            HistoryCommand.class,
+            ReportCommand.class,
+            ExportCommand.class,
             GuiCommand.class,
         })
 public final class RcbenchCommand implements Callable<Integer> {

@@ -101,6 +101,10 @@ public final class DesignReader {
 
     private Design design(JsonNode root) {
         onlyKeys(root, "", TOP);
+        JsonNode version = root.get("rcbench_design");
+        if (version != null && !(version.isInt() && version.asInt() == 1)) {
+            throw fail("rcbench_design", "this rcbench reads design format 1, not " + version.asText());
+        }
         JsonNode board = table(root, "board", false);
         String name = board == null ? "" : string(board, "board.name", false);
         String revision = board == null ? "" : string(board, "board.revision", false);

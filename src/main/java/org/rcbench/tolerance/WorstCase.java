@@ -24,8 +24,8 @@ import org.rcbench.circuit.TimingQuantity;
  * with real diodes, for example) can peak inside the box.
  *
  * <p>Method: evaluate the centre, every corner (all 2^n for n <= 12 inputs, else 4096 random corners)
- * and 64 n random interior points; then from the best point found for each quantity and direction,
- * refine inside the box with a bounded optimiser (Commons Math BOBYQA, Powell 2009, for n >= 2;
+ * and 64 n random interior points; then, unless the best point found for a quantity and direction
+ * is a corner from which every step into the box is worse, refine from it with a bounded optimiser (Commons Math BOBYQA, Powell 2009, for n >= 2;
  * Brent's method for n = 1). Points where the circuit stops are recorded (the box "may stop") and
  * excluded from the bands. Deterministic (fixed seed). Not thread-safe; one instance per use.
  */
@@ -103,8 +103,12 @@ public final class WorstCase {
         Map<TimingQuantity, Band> bands = new EnumMap<>(TimingQuantity.class);
         for (int q = 0; q < nq; q++) {
             if (n > 0 && Double.isFinite(min[q])) {
-                min[q] = Math.min(min[q], refine(q, argMin[q], false));
-                max[q] = Math.max(max[q], refine(q, argMax[q], true));
+                if (!isCornerOptimum(q, argMin[q], min[q], false)) {
+                    min[q] = Math.min(min[q], refine(q, argMin[q], false));
+                }
+                if (!isCornerOptimum(q, argMax[q], max[q], true)) {
+                    max[q] = Math.max(max[q], refine(q, argMax[q], true));
+                }
             }
             bands.put(quantities.get(q), Double.isFinite(min[q]) ? new Band(min[q], max[q]) : Band.NONE);
         }
@@ -150,6 +154,29 @@ public final class WorstCase {
         }
     }
 
+    /**
+     * Whether {@code u} is a corner from which every step into the box makes quantity {@code q} worse
+     * (the first-order optimality condition at a vertex), so no local search is needed there.
+     */
+    private boolean isCornerOptimum(int q, double[] u, double value, boolean maximise) {
+        double[] probe = u.clone();
+        for (int i = 0; i < u.length; i++) {
+            if (u[i] != 0 && u[i] != 1) {
+                return false;
+            }
+        }
+        for (int i = 0; i < u.length; i++) {
+            probe[i] = u[i] == 0 ? 1e-4 : 1 - 1e-4;
+            boolean ok = eval(probe);
+            double v = ok ? timing.value(quantities.get(q)) : Double.NaN;
+            probe[i] = u[i];
+            if (!ok || Double.isNaN(v) || (maximise ? v >= value : v <= value)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
     /** The best value a bounded local search from {@code start} finds for quantity {@code q}. */
     private double refine(int q, double[] start, boolean maximise) {
         TimingQuantity quantity = quantities.get(q);
@@ -185,8 +212,8 @@ public final class WorstCase {
                 double[] lo = new double[varying.length];
                 double[] hi = new double[varying.length];
                 java.util.Arrays.fill(hi, 1);
-                BOBYQAOptimizer opt = new BOBYQAOptimizer(2 * varying.length + 1, 0.25, 1e-8);
-                opt.optimize(new MaxEval(300 + 60 * varying.length), new ObjectiveFunction(point -> {
+                BOBYQAOptimizer opt = new BOBYQAOptimizer(2 * varying.length + 1, 0.25, 1e-7);
+                opt.optimize(new MaxEval(200 + 40 * varying.length), new ObjectiveFunction(point -> {
                     double v = f.applyAsDouble(point);
                     return Double.isNaN(v) ? penalty : v;
                 }), maximise ? GoalType.MAXIMIZE : GoalType.MINIMIZE, new InitialGuess(start.clone()),
