@@ -58,6 +58,7 @@ public final class BenchModel implements AutoCloseable {
     private Path recordingFile;
     private Path lastRecording;
     private Design sourceDesign;
+    private final BackgroundSlot<String> saving;
     private Expectation shownExpectation;
     private boolean readoutDirty = true;
     private long lastReadout = Long.MIN_VALUE / 2;
@@ -75,6 +76,7 @@ public final class BenchModel implements AutoCloseable {
         this.diagnosis = new DiagnosisModel(services.diagnosis(), services.worker());
         this.tuning = new TuningModel(services.tuning(), services.worker());
         this.picker = new PickerModel(design, services.worker());
+        this.saving = new BackgroundSlot<>(services.worker());
         safetyNoticeDue.set(!settings.safetyNoticeAccepted());
         design.designProperty().addListener((o, was, now) -> designChanged(now));
     }
@@ -267,7 +269,7 @@ public final class BenchModel implements AutoCloseable {
             return;
         }
         try {
-            p.startRecording(file, RecorderOptions.defaults(), status.get().probe());
+            p.startRecording(file, RecorderOptions.defaults(), status.get().probeId());
         } catch (BadInputException e) {
             message.set("not recording: " + e.getMessage());
             return;
@@ -301,10 +303,10 @@ public final class BenchModel implements AutoCloseable {
         return recording.get() ? recordingFile : lastRecording;
     }
 
-    /** Saves the current check to the history, when this build has one. */
+    /** Saves the current check to the history (on the worker), when this build has one. */
     public void saveCheck() {
         if (services.checks() == null) {
-            message.set("saving checks needs the history stage, which this build lacks");
+            message.set("saving checks needs the history and diagnosis stages, which this build lacks");
             return;
         }
         LiveFrame f = frame.get();
@@ -312,10 +314,9 @@ public final class BenchModel implements AutoCloseable {
             message.set("a check needs a design and a measurement");
             return;
         }
-        try {
-            message.set(services.checks().save(design.design(), f.measurement(), null, lastRecording()));
-        } catch (BadInputException e) {
-            message.set("check not saved: " + e.getMessage());
+        CheckSaver.Request r = new CheckSaver.Request(design.design(), f, lastRecording(), status.get().probeId());
+        if (saving.offer(() -> services.checks().save(r))) {
+            message.set("saving the check…");
         }
     }
 
@@ -361,6 +362,10 @@ public final class BenchModel implements AutoCloseable {
         diagnosis.poll();
         tuning.poll();
         picker.poll();
+        BackgroundSlot.Outcome<String> saved = saving.take();
+        if (saved != null) {
+            message.set(saved.value() != null ? saved.value() : "check not saved: " + saved.problem());
+        }
         if (readoutDirty && nowNanos - lastReadout >= READOUT_NANOS) {
             readings.update(frame.get(), shownExpectation, averaging.get());
             readoutDirty = false;

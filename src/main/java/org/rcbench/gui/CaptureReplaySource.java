@@ -72,7 +72,7 @@ public final class CaptureReplaySource implements BenchSource {
         try (Capture capture = CaptureFiles.open(file)) {
             Timebase tb = capture.timebase();
             status = new SourceStatus(ConnectionState.STREAMING, "replaying " + file + pace(), name(),
-                    clockWords(tb), 0, 0);
+                    clockWords(tb), 0, 0, capture.header().getOrDefault(org.rcbench.capture.EdgeCaptureFormat.PROBE, ""));
             sink.onClock(tb, capture.channels());
             sink.onStatus(status);
             Pacer pacer = new Pacer(sink, tb.ticksPerSecond(), status);
@@ -89,7 +89,7 @@ public final class CaptureReplaySource implements BenchSource {
                     + (warnings > 1 ? " (and " + (warnings - 1) + " more warnings)" : "");
             SourceStatus last = pacer.status();
             sink.onStatus(new SourceStatus(ConnectionState.ENDED, "replayed " + pacer.edges + " edges of " + file
-                    + warned, last.probe(), last.clock(), last.gaps(), warnings));
+                    + warned, last.probe(), last.clock(), last.gaps(), warnings, last.probeId()));
         } catch (BadInputException e) {
             sink.onStatus(status.withState(ConnectionState.FAILED, e.getMessage()));
         } catch (IOException e) {
@@ -176,7 +176,7 @@ public final class CaptureReplaySource implements BenchSource {
         }
 
         SourceStatus status() {
-            return new SourceStatus(base.state(), base.line(), base.probe(), base.clock(), gaps, 0);
+            return new SourceStatus(base.state(), base.line(), base.probe(), base.clock(), gaps, 0, base.probeId());
         }
 
         private void sleepUntil(long due) {

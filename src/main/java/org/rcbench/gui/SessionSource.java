@@ -83,7 +83,7 @@ public final class SessionSource implements BenchSource {
                 + " fw " + h.firmwareVersion();
         String clock = h == null ? "" : clockWords(h);
         long errors = c.crcErrors() + c.resyncs() + c.overruns() + c.malformed() + c.linesBad() + c.framesMissed();
-        return new SourceStatus(state(s), s.line(), probe, clock, c.gapMarks(), errors);
+        return new SourceStatus(state(s), s.line(), probe, clock, c.gapMarks(), errors, h == null ? "" : h.probeIdHex());
     }
 
     private static ConnectionState state(SessionStatus s) {

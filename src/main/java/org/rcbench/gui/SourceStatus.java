@@ -12,13 +12,22 @@ import java.util.Objects;
  * @param gaps    stretches of data lost so far (each a gap in the edge stream)
  * @param errors  corrupt or lost stretches the decoder counted (CRC errors, resyncs, overruns, bad
  *                lines) or, for a file, its warnings
+ * @param probeId the probe's own id as stored with recordings and checks (16 hex digits from its hello,
+ *                or a capture file's {@code probe} header); "" when unknown
  */
-public record SourceStatus(ConnectionState state, String line, String probe, String clock, long gaps, long errors) {
+public record SourceStatus(ConnectionState state, String line, String probe, String clock, long gaps, long errors,
+        String probeId) {
     public SourceStatus {
         Objects.requireNonNull(state, "state");
         Objects.requireNonNull(line, "line");
         Objects.requireNonNull(probe, "probe");
         Objects.requireNonNull(clock, "clock");
+        Objects.requireNonNull(probeId, "probeId");
+    }
+
+    /** A status without a probe id. */
+    public SourceStatus(ConnectionState state, String line, String probe, String clock, long gaps, long errors) {
+        this(state, line, probe, clock, gaps, errors, "");
     }
 
     /** Nothing connected. */
@@ -27,6 +36,6 @@ public record SourceStatus(ConnectionState state, String line, String probe, Str
     }
 
     public SourceStatus withState(ConnectionState s, String newLine) {
-        return new SourceStatus(s, newLine, probe, clock, gaps, errors);
+        return new SourceStatus(s, newLine, probe, clock, gaps, errors, probeId);
     }
 }
