@@ -18,8 +18,8 @@ import org.rcbench.record.RecorderOptions;
 /**
  * The window's end of a live source: measures one channel with a {@link CycleMeter} on the
  * source's thread, optionally records every edge, and every {@code publishNanos} (checked on each
- * edge, so a slow signal publishes on each of its edges) builds a {@link LiveFrame} that the window
- * takes with {@link #latestFrame()}. The window never touches the meter, so the per-edge path takes
+ * edge, so a slow signal publishes on each of its edges, and on each status call when edges are
+ * still unpublished) builds a {@link LiveFrame} that the window takes with {@link #latestFrame()}. The window never touches the meter, so the per-edge path takes
  * no lock except while recording.
  *
  * <p>Threads: the {@link SourceSink} methods run on the source's thread; everything else may be
@@ -49,6 +49,7 @@ public final class LivePipeline implements SourceSink {
     private long serial;
     private long nextPublish;
     private long latestTick = -1;
+    private boolean unpublished;
 
     /**
      * @param channel      the probe channel to measure; when a file names channels and not this
@@ -85,6 +86,7 @@ public final class LivePipeline implements SourceSink {
             return; // no clock yet: nothing can be measured
         }
         meter.onEdge(tick, ch, level);
+        unpublished = true;
         if (tick > latestTick) {
             latestTick = tick;
         }
@@ -118,9 +120,19 @@ public final class LivePipeline implements SourceSink {
         publish(System.nanoTime(), true);
     }
 
+    /**
+     * Keeps the status and, when edges arrived since the last frame, publishes one: a burst of edges
+     * followed by silence (a probe's last frame before it stops) still reaches the window within a
+     * status interval. Sources call this on their own thread, like the edges.
+     */
     @Override
     public void onStatus(SourceStatus s) {
         status.set(s);
+        if (meter != null && unpublished) {
+            long now = System.nanoTime();
+            publish(now, false);
+            nextPublish = now + publishNanos;
+        }
     }
 
     private void record(long tick, int ch, int level) {
@@ -150,6 +162,7 @@ public final class LivePipeline implements SourceSink {
                 Math.min(window, capacity), start, high, low, n, meter.trend(), Steadiness.steady(high, low, n, window),
                 latestTick, now, ended));
         publishCostNanos = System.nanoTime() - now;
+        unpublished = false;
     }
 
     // ---- any thread ------------------------------------------------------------------------------
