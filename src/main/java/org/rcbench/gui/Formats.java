@@ -46,6 +46,8 @@ public final class Formats {
         if (!Double.isFinite(v) || !Double.isFinite(nominal) || nominal == 0) {
             return "";
         }
-        return String.format(Locale.ROOT, "%+.1f %%", (v / nominal - 1) * 100);
+        double percent = (v / nominal - 1) * 100;
+        // Anything that rounds to zero is written without a sign ("-0.0 %" reads like a deviation).
+        return Math.abs(percent) < 0.05 ? "0.0 %" : String.format(Locale.ROOT, "%+.1f %%", percent);
     }
 }

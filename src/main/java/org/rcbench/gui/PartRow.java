@@ -28,7 +28,7 @@ public final class PartRow {
         role = e.role().fileName();
         type = e.type();
         kind.set(e.kind().fileName());
-        value.set(ValueCode.formatSi(e.value(), type.unit(), 4));
+        value.set(ValueCode.formatSi(e.value(), type.unit(), type == ElementType.DIODE ? 3 : 4));
         tolerance.set(toleranceText(design.spread(designator).tolerance()));
         wiper.set(type == ElementType.POTENTIOMETER ? String.format(java.util.Locale.ROOT, "%.3f", e.wiper()) : "");
     }

@@ -129,7 +129,7 @@ public final class ReadingsModel {
 
     private static String band(TimingQuantity q, Expected x) {
         if (x.hasStatistical() && x.hasWorstCase()) {
-            return "band " + Formats.range(q, x.statLow(), x.statHigh()) + ", worst case "
+            return "band " + Formats.range(q, x.statLow(), x.statHigh()) + "\nworst case "
                     + Formats.range(q, x.worstLow(), x.worstHigh());
         }
         if (x.hasStatistical()) {

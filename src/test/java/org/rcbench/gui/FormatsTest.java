@@ -22,6 +22,7 @@ class FormatsTest {
         assertThat(Formats.plusMinus(TimingQuantity.DUTY, 0.0012)).isEqualTo("± 0.12 %");
         assertThat(Formats.deviation(700, 690)).isEqualTo("+1.4 %");
         assertThat(Formats.deviation(700, Double.NaN)).isEmpty();
+        assertThat(Formats.deviation(0.5179, 0.518)).isEqualTo("0.0 %");
     }
 
     // text, quantity, value in SI (duty as a fraction)

@@ -59,20 +59,19 @@ public final class BenchWindow {
         this.loop = new FrameLoop(model);
         this.sourceBar = new SourceBar(model);
 
+        // The readings run across the whole width, large, right under the source strip; the design
+        // sits left of the plots, the suspects and the trimmer guide right of them.
         ScrollPane left = scroll(new DesignPane(model));
         VBox right = new VBox(new SuspectsPane(model), new TuningPane(model));
-        right.setPrefWidth(330);
-        VBox.setVgrow(right.getChildren().get(0), Priority.SOMETIMES);
+        right.setPrefWidth(290);
         PlotsPane plots = new PlotsPane(model);
-        VBox centre = new VBox(new ReadingsPane(model), plots);
-        VBox.setVgrow(plots, Priority.ALWAYS);
 
         BorderPane root = new BorderPane();
         root.setId("bench-window");
         root.getStyleClass().add("bench-window");
-        root.setTop(new VBox(menus(), sourceBar));
+        root.setTop(new VBox(menus(), sourceBar, new ReadingsPane(model)));
         root.setLeft(left);
-        root.setCenter(centre);
+        root.setCenter(plots);
         root.setRight(scroll(right));
         root.setBottom(statusLine());
         scene = new Scene(root, width, height);

@@ -36,7 +36,7 @@ final class DesignPane extends VBox {
         this.model = model;
         getStyleClass().add("design-pane");
         setPadding(new Insets(10));
-        setPrefWidth(456);
+        setPrefWidth(436);
 
         Label heading = new Label("Board design");
         heading.getStyleClass().add("pane-heading");
@@ -66,10 +66,10 @@ final class DesignPane extends VBox {
         HBox buttons = new HBox(8, open, pick, save);
 
         table.setId("parts-table");
-        table.setHgap(6);
+        table.setHgap(4);
         table.setVgap(4);
         table.getStyleClass().add("parts-table");
-        double[] widths = {38, 92, 104, 70, 58, 44};
+        double[] widths = {34, 88, 112, 66, 50, 44};
         for (double w : widths) {
             javafx.scene.layout.ColumnConstraints c = new javafx.scene.layout.ColumnConstraints();
             c.setMinWidth(w);

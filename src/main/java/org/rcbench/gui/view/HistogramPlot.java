@@ -12,8 +12,8 @@ import org.rcbench.units.SiFormat;
  * scale (a badly drifted part), the data keep the scale and a note says where the band is.
  */
 final class HistogramPlot extends PlotCanvas {
-    static final int BINS = 48;
-    private final int[] counts = new int[BINS];
+    static final int MAX_BINS = 60;
+    private final int[] counts = new int[MAX_BINS];
     private int cycles;
 
     HistogramPlot() {
@@ -55,15 +55,19 @@ final class HistogramPlot extends PlotCanvas {
                 min = uLo - (uHi - uLo) * 0.04;
                 max = uHi + (uHi - uLo) * 0.04;
             } else {
-                offScale = "expected " + SiFormat.format(e.nominal(), "s", 4) + (e.nominal() < lo ? " (left" : " (right")
-                        + ", off this scale)";
+                offScale = (e.nominal() < lo ? "← expected " : "expected → ") + SiFormat.format(e.nominal(), "s", 4);
             }
         }
+        // Bins a whole number of probe ticks wide: narrower bins than the tick would alternate
+        // between full and empty, since periods only take whole-tick values.
+        double tick = f.timebase().tickSeconds();
+        double width = Math.max(1, Math.ceil((max - min) / tick / MAX_BINS)) * tick;
+        int bins = (int) Math.min(MAX_BINS, Math.ceil((max - min) / width));
+        max = min + bins * width;
         java.util.Arrays.fill(counts, 0);
-        double width = (max - min) / BINS;
         int top = 1;
         for (int i = 0; i < n; i++) {
-            int b = (int) Math.min(BINS - 1, Math.max(0, Math.floor((f.periodSeconds(i) - min) / width)));
+            int b = (int) Math.min(bins - 1, Math.max(0, Math.floor((f.periodSeconds(i) - min) / width)));
             top = Math.max(top, ++counts[b]);
         }
         for (double t : Ticks.linear(min, max, xTicks(a))) {
@@ -76,8 +80,8 @@ final class HistogramPlot extends PlotCanvas {
             drawBand(g, a, e, min, max);
         }
         g.setFill(Palette.TRACE);
-        double bw = a.w() / BINS;
-        for (int b = 0; b < BINS; b++) {
+        double bw = a.w() / bins;
+        for (int b = 0; b < bins; b++) {
             if (counts[b] > 0) {
                 double y = a.yOf(counts[b], 0, top * 1.08);
                 g.fillRect(a.x() + b * bw + 0.5, y, Math.max(1, bw - 1), a.y() + a.h() - y);

@@ -15,7 +15,7 @@ import org.rcbench.gui.LiveFrame;
  * drawn here. Window thread only.
  */
 abstract class PlotCanvas extends Region {
-    static final double LEFT = 58;
+    static final double LEFT = 74;
     static final double RIGHT = 24;
     static final double TOP = 24;
     static final double BOTTOM = 30;

@@ -19,7 +19,10 @@ final class ReadingTile extends VBox {
         Label detail = small(r, "reading-detail");
         detail.textProperty().bind(r.detailProperty());
         Label expected = small(r, "reading-expected");
-        expected.textProperty().bind(r.expectedProperty().concat("   ").concat(r.deviationProperty()));
+        expected.textProperty().bind(javafx.beans.binding.Bindings.createStringBinding(
+                () -> r.expectedProperty().get() + (r.deviationProperty().get().isEmpty() ? ""
+                        : " (" + r.deviationProperty().get() + ")"),
+                r.expectedProperty(), r.deviationProperty()));
         Label band = small(r, "reading-band");
         band.textProperty().bind(r.bandProperty());
         StateBadge badge = new StateBadge(r.stateProperty(), 16);

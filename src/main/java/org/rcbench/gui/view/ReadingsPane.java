@@ -9,7 +9,6 @@ import javafx.scene.control.Label;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
-import javafx.scene.layout.TilePane;
 import javafx.scene.layout.VBox;
 import javafx.util.StringConverter;
 import org.rcbench.gui.BenchModel;
@@ -19,7 +18,7 @@ import org.rcbench.gui.ReadingsModel;
 /** The large live readings, one tile each, with the averaging window above them. */
 final class ReadingsPane extends VBox {
     private final BenchModel model;
-    private final TilePane tiles = new TilePane(10, 10);
+    private final HBox tiles = new HBox(10);
 
     ReadingsPane(BenchModel model) {
         super(6);
@@ -58,8 +57,7 @@ final class ReadingsPane extends VBox {
         HBox head = new HBox(8, heading, quiet, spring, avg, averaging);
         head.setAlignment(Pos.CENTER_LEFT);
 
-        tiles.setPrefColumns(5);
-        tiles.setTileAlignment(Pos.TOP_LEFT);
+        tiles.setFillHeight(true);
         model.readings().readings().addListener((ListChangeListener<Reading>) c -> rebuild());
         rebuild();
         getChildren().addAll(head, tiles);
@@ -69,7 +67,10 @@ final class ReadingsPane extends VBox {
         tiles.getChildren().clear();
         for (Reading r : model.readings().readings()) {
             ReadingTile t = new ReadingTile(r);
-            t.setPrefWidth(192);
+            t.setPrefWidth(230);
+            t.setMinWidth(150);
+            t.setMaxWidth(360);
+            HBox.setHgrow(t, Priority.ALWAYS);
             tiles.getChildren().add(t);
         }
     }

@@ -28,7 +28,9 @@ final class SuspectsPane extends VBox {
         note.textProperty().bind(d.noteProperty());
         ListView<Suspect> list = new ListView<>(d.suspects());
         list.setId("suspects");
-        list.setPrefHeight(190);
+        list.setPrefHeight(150);
+        list.visibleProperty().bind(d.availableProperty());
+        list.managedProperty().bind(list.visibleProperty());
         list.setCellFactory(v -> new ListCell<>() {
             @Override
             protected void updateItem(Suspect s, boolean empty) {

@@ -22,7 +22,7 @@ import org.rcbench.gui.TuningModel;
  */
 final class TuningPane extends VBox {
     private final TuningModel tuning;
-    private final Canvas gauge = new Canvas(300, 64);
+    private final Canvas gauge = new Canvas(250, 64);
 
     TuningPane(BenchModel model) {
         super(6);
