@@ -363,4 +363,13 @@ class VirtualBoardTest {
         RecordingSink sink = run(board, 0.1);
         assertThat(sink.edges).containsExactly(new Edge((long) Math.floor(1e-3 * CLOCK), 0, EdgeSink.HIGH));
     }
+
+    @Test
+    void playingInStepWithTheClockGivesTheSameEdges() {
+        SimulationSpec spec = SimulationSpec.defaults().withJitterSeconds(1e-6).withSeed(9);
+        RecordingSink played = new RecordingSink();
+        VirtualBoard.of(piper(), spec).play(0.2, played, () -> true);
+        assertThat(played.edges).hasSizeGreaterThan(200).isEqualTo(run(VirtualBoard.of(piper(), spec), 0.2).edges);
+        assertThat(played.endCalls).isEqualTo(1);
+    }
 }
