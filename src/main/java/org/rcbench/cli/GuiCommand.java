@@ -3,15 +3,17 @@ package org.rcbench.cli;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
-import java.util.ArrayList;
-import java.util.List;
 import java.util.concurrent.Callable;
 import org.rcbench.common.BadInputException;
 import org.rcbench.gui.BenchServices;
 import org.rcbench.gui.BenchSettings;
 import org.rcbench.gui.SourceChoice;
+import org.rcbench.gui.Sources;
 import org.rcbench.gui.view.GuiLauncher;
+import org.rcbench.sim.Pace;
+import org.rcbench.source.SourceSpec;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -24,34 +26,27 @@ import picocli.CommandLine.Model.CommandSpec;
 @Command(name = "gui", mixinStandardHelpOptions = true,
         description = {"Open the bench window: live readings against the design's bands, plots, suspects and the"
                 + " trimmer guide.",
-            "Reads the simulated board by default, or a serial probe (--port), or replays a capture file in real time.",
+            "Reads the simulated board by default (demo:piper-mk2, with a little timing noise and a short warm-up"
+                + " unless --jitter or --warm-up say otherwise), or a probe (--port), or replays a capture file"
+                + " (FILE or --replay) in real time.",
             "Safety: the probe's ground is the computer's ground; never probe mains-referenced or transformerless"
                 + " circuits without isolation. The window shows the full notice on first start."})
 public final class GuiCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Parameters(index = "0", arity = "0..1", paramLabel = "FILE", description = "Capture file to replay.")
+    @Mixin
+    SourceOptions source;
+
+    @Mixin
+    DatabaseOption database;
+
+    @Parameters(index = "0", arity = "0..1", paramLabel = "FILE", description = "Capture file to replay (as --replay).")
     Path file;
-
-    @Option(names = "--sim", paramLabel = "DESIGN", arity = "0..1", fallbackValue = "",
-            description = "Read the simulated board built from DESIGN (without a value: the built-in board).")
-    String sim;
-
-    @Option(names = "--fault", paramLabel = "DEVIATION",
-            description = "A deviation built into the simulated board, e.g. C1=-35% (repeatable).")
-    List<String> faults = new ArrayList<>();
-
-    @Option(names = "--port", paramLabel = "PORT", description = "Read the probe on PORT (device path or USB id).")
-    String port;
 
     @Option(names = "--design", paramLabel = "DESIGN",
             description = "Design to compare with (default: the simulated board's design, if any).")
     Path design;
-
-    @Option(names = "--speed", paramLabel = "X", defaultValue = "1",
-            description = "Replay speed for FILE relative to real time (default: ${DEFAULT-VALUE}).")
-    double speed;
 
     @Option(names = "--snapshot", paramLabel = "PNG",
             description = "Render the window headless after --after of data, write it to PNG and exit.")
@@ -61,15 +56,21 @@ public final class GuiCommand implements Callable<Integer> {
             description = "With --snapshot: seconds of data before the picture (default: ${DEFAULT-VALUE}).")
     double afterSeconds;
 
-    @Option(names = "--size", paramLabel = "WxH", defaultValue = "1440x900",
+    @Option(names = "--size", paramLabel = "WxH", defaultValue = "1280x800",
             description = "With --snapshot: window size in pixels (default: ${DEFAULT-VALUE}).")
     String size;
 
     @Override
     public Integer call() throws Exception {
-        SourceChoice choice = choice();
+        if (file != null) {
+            if (source.replay != null) {
+                throw new BadInputException("gui", "give the capture file once: FILE or --replay FILE");
+            }
+            source.replay = file;
+        }
+        SourceChoice choice = choice(source.sourceSpec());
         Path folder = Path.of("").toAbsolutePath();
-        BenchServices services = GuiServices.standard();
+        BenchServices services = GuiServices.standard(SourceOptions.calibrations(database));
         if (snapshot != null) {
             int[] wh = parseSize(size);
             if (!(afterSeconds >= 0) || afterSeconds > 600) {
@@ -91,24 +92,20 @@ public final class GuiCommand implements Callable<Integer> {
         return ExitCodes.OK;
     }
 
-    private SourceChoice choice() {
-        int given = (file != null ? 1 : 0) + (sim != null ? 1 : 0) + (port != null ? 1 : 0);
-        if (given > 1) {
-            throw new BadInputException("gui", "choose one source: --sim DESIGN, --port PORT or a capture FILE");
+    /** The source strip's fields for the command line's source, keeping the exact spec for the first start. */
+    private SourceChoice choice(SourceSpec s) {
+        if (s instanceof SourceSpec.Port p) {
+            return SourceChoice.port(p.port()).withExact(s);
         }
-        if (!faults.isEmpty() && (file != null || port != null)) {
-            throw new BadInputException("--fault", "only the simulated board takes faults");
+        if (s instanceof SourceSpec.CaptureFile f) {
+            return SourceChoice.file(f.file().toString()).withFast(f.pace() == Pace.FAST).withExact(s);
         }
-        if (!(speed > 0)) {
-            throw new BadInputException("--speed", "must be above zero, not " + speed);
+        SourceSpec.Simulated sim = (SourceSpec.Simulated) s;
+        if (source.jitterSeconds == 0 && source.warmUp == null && sim.design() != null) {
+            sim = new SourceSpec.Simulated(sim.label(), sim.design(), sim.referenceHz(),
+                    Sources.benchConditions(sim.simulation(), sim.design()), sim.probe());
         }
-        if (file != null) {
-            return SourceChoice.file(file.toString()).withSpeed(speed);
-        }
-        if (port != null) {
-            return SourceChoice.port(port);
-        }
-        return SourceChoice.simulated(sim == null ? "" : sim, String.join(" ", faults));
+        return SourceChoice.simulated(sim.label(), String.join(" ", source.faults)).withExact(sim);
     }
 
     static int[] parseSize(String text) {

@@ -1,19 +1,16 @@
 package org.rcbench.cli;
 
-import java.nio.file.Path;
 import org.rcbench.gui.BenchServices;
-import org.rcbench.gui.PredictedExpectations;
-import org.rcbench.gui.SimulatedBoards;
 import org.rcbench.gui.Sources;
+import org.rcbench.probe.CalibrationStore;
 
 /** The stages the bench window calls in this build. */
 final class GuiServices {
     private GuiServices() {
     }
 
-    static BenchServices standard() {
-        return BenchServices.standard()
-                .withSources(Sources.standard(new SimulatedBoards(Path.of("captures", "piper-mk2.toml"))))
-                .withExpectations(new PredictedExpectations());
+    /** Shared sources with the probe calibrations of {@code calibrations}, bands from the tolerance stage. */
+    static BenchServices standard(CalibrationStore calibrations) {
+        return BenchServices.standard().withSources(Sources.standard(calibrations));
     }
 }

@@ -24,9 +24,13 @@ public record BenchServices(SourceFactory sources, ExpectationSource expectation
         Objects.requireNonNull(worker, "worker");
     }
 
-    /** Everything this build has, with one daemon worker thread. */
+    /**
+     * Shared sources without stored calibrations, bands from the tolerance stage, one daemon worker
+     * thread; no diagnosis, tuning or history (add them with the {@code with...} methods).
+     */
     public static BenchServices standard() {
-        return new BenchServices(Sources.standard(null), new NominalExpectations(), null, null, null, newWorker());
+        return new BenchServices(Sources.standard(org.rcbench.probe.CalibrationStore.none()),
+                new PredictedExpectations(), null, null, null, newWorker());
     }
 
     /** One daemon thread named {@code rcbench-gui-worker}. */

@@ -34,7 +34,8 @@ class BenchModelTest {
     }
 
     private BenchModel newModel() {
-        BenchServices services = BenchServices.standard().withWorker(Runnable::run);
+        BenchServices services = BenchServices.standard().withExpectations(new NominalExpectations())
+                .withWorker(Runnable::run);
         model = new BenchModel(services, BenchSettings.inMemory(true), 5_000_000L);
         return model;
     }
@@ -49,7 +50,7 @@ class BenchModelTest {
     }
 
     private void runToEnd(Path file) throws InterruptedException {
-        model.choose(SourceChoice.file(file.toString()).withSpeed(Double.POSITIVE_INFINITY));
+        model.choose(SourceChoice.file(file.toString()).withFast(true));
         model.start();
         assertThat(ModelDriver.pollUntil(model, () -> model.frameProperty().get() != null
                 && model.frameProperty().get().ended(), Duration.ofSeconds(20))).isTrue();
@@ -125,10 +126,10 @@ class BenchModelTest {
 
     @Test
     void recordingWritesTheEdgesAsTheyArriveToAReadableCapture() throws Exception {
-        Path file = TestCaptures.astable(dir.resolve("src.rce"), 4000, 23188.4, 0.5, 2.5, 0, 7);
+        Path file = TestCaptures.astable(dir.resolve("src.rce"), 2000, 23188.4, 0.5, 2.5, 0, 7);
         Path out = dir.resolve("rec.rce");
         newModel();
-        model.choose(SourceChoice.file(file.toString()).withSpeed(2));
+        model.choose(SourceChoice.file(file.toString()));
         model.start();
         assertThat(ModelDriver.pollUntil(model, () -> model.frameProperty().get() != null, Duration.ofSeconds(10)))
                 .isTrue();
@@ -161,6 +162,7 @@ class BenchModelTest {
         assertThat(ModelDriver.pollUntil(model, () -> model.statusProperty().get().state() == ConnectionState.FAILED,
                 Duration.ofSeconds(10))).isTrue();
         assertThat(model.statusProperty().get().line()).contains("ttyNOPE").contains("no such port");
+        assertThat(model.messageProperty().get()).isEmpty();
         assertThat(model.runningProperty().get()).isFalse();
     }
 

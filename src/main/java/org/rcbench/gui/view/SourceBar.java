@@ -129,14 +129,23 @@ final class SourceBar extends VBox {
         }
     }
 
-    /** Start with what the fields say, or stop. */
+    /**
+     * Start with what the fields say, or stop. Unchanged fields keep the chosen source as it is (with
+     * every option the command line gave it).
+     */
     void toggle() {
         if (model.runningProperty().get()) {
             model.stop();
-        } else {
-            model.choose(fieldsChoice());
-            model.start();
+            return;
         }
+        SourceChoice now = model.choiceProperty().get();
+        SourceChoice typed = fieldsChoice();
+        boolean same = typed.kind() == now.kind() && typed.target().equals(now.target())
+                && typed.fault().equals(now.fault());
+        if (!same) {
+            model.choose(typed);
+        }
+        model.start();
     }
 
     private void kindChanged(SourceChoice.Kind k) {

@@ -29,9 +29,13 @@ import org.rcbench.gui.ConnectionState;
 import org.rcbench.gui.Formats;
 import org.rcbench.gui.NominalExpectations;
 import org.rcbench.gui.SafetyNotice;
-import org.rcbench.gui.SimulatedBoardSource;
+import org.rcbench.gui.SharedSource;
+import org.rcbench.probe.CalibrationStore;
+import org.rcbench.probe.SessionConfig;
+import org.rcbench.sim.ProbeOptions;
+import org.rcbench.source.LiveSource;
+import org.rcbench.source.SourceSpec;
 import org.rcbench.gui.SourceChoice;
-import org.rcbench.gui.Sources;
 import org.rcbench.gui.TeeSource;
 import org.rcbench.measure.Measurement;
 import org.rcbench.sim.SimulationSpec;
@@ -60,12 +64,15 @@ class BenchWindowTest {
         // A fixed seed and no warm-up: the simulated board, with every edge also fed to the test's meter.
         BenchServices services = BenchServices.standard()
                 .withExpectations(new NominalExpectations())
-                .withSources(Sources.standard(choice -> {
-                    TeeSource t = new TeeSource(new SimulatedBoardSource(piper,
-                            SimulationSpec.defaults().withJitterSeconds(100e-9).withSeed(42), choice.fault()));
+                .withSources(choice -> {
+                    // The simulated board on its simulated probe, through the real protocol and decoder.
+                    SourceSpec spec = new SourceSpec.Simulated("piper", piper, Double.NaN,
+                            SimulationSpec.defaults().withJitterSeconds(100e-9).withSeed(42), ProbeOptions.defaults());
+                    TeeSource t = new TeeSource(new SharedSource(LiveSource.of(spec,
+                            SessionConfig.defaults().withReconnectPollMillis(50), CalibrationStore.none())));
                     tee.set(t);
                     return t;
-                }));
+                });
         model = new BenchModel(services, BenchSettings.inMemory(true));
         window = new BenchWindow(model, dir, 1280, 800);
         window.show(s);

@@ -10,7 +10,6 @@ import org.rcbench.gui.BenchServices;
 import org.rcbench.gui.BenchSettings;
 import org.rcbench.gui.LiveFrame;
 import org.rcbench.gui.PredictedExpectations;
-import org.rcbench.gui.SimulatedBoards;
 import org.rcbench.gui.SourceChoice;
 import org.rcbench.gui.Sources;
 
@@ -35,7 +34,7 @@ public final class FrameTimeBench {
         System.setProperty("headless.geometry", (int) w + "x" + (int) h + "-32");
         GuiLauncher.startToolkit(true);
         BenchServices services = BenchServices.standard().withExpectations(new PredictedExpectations())
-                .withSources(Sources.standard(new SimulatedBoards(design)));
+                .withSources(Sources.standard(org.rcbench.probe.CalibrationStore.none()));
         CompletableFuture<Object[]> opened = GuiLauncher.onFxThread(() -> {
             BenchModel model = new BenchModel(services, BenchSettings.inMemory(true));
             model.choose(SourceChoice.simulated(design.toString(), ""));
