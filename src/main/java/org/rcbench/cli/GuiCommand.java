@@ -70,7 +70,7 @@ public final class GuiCommand implements Callable<Integer> {
         }
         SourceChoice choice = choice(source.sourceSpec());
         Path folder = Path.of("").toAbsolutePath();
-        BenchServices services = GuiServices.standard(SourceOptions.calibrations(database));
+        BenchServices services = GuiServices.standard(SourceOptions.calibrations(database), database.path());
         if (snapshot != null) {
             int[] wh = parseSize(size);
             if (!(afterSeconds >= 0) || afterSeconds > 600) {

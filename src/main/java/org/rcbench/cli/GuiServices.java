@@ -1,6 +1,8 @@
 package org.rcbench.cli;
 
+import java.nio.file.Path;
 import org.rcbench.gui.BenchServices;
+import org.rcbench.gui.HistoryCheckSaver;
 import org.rcbench.gui.Sources;
 import org.rcbench.probe.CalibrationStore;
 
@@ -9,8 +11,12 @@ final class GuiServices {
     private GuiServices() {
     }
 
-    /** Shared sources with the probe calibrations of {@code calibrations}, bands from the tolerance stage. */
-    static BenchServices standard(CalibrationStore calibrations) {
-        return BenchServices.standard().withSources(Sources.standard(calibrations));
+    /**
+     * Shared sources with the probe calibrations of {@code calibrations}, bands, suspects and the
+     * trimmer guide, and checks saved to the history at {@code database}.
+     */
+    static BenchServices standard(CalibrationStore calibrations, Path database) {
+        return BenchServices.standard().withSources(Sources.standard(calibrations))
+                .withChecks(new HistoryCheckSaver(database));
     }
 }

@@ -306,7 +306,7 @@ public final class BenchModel implements AutoCloseable {
     /** Saves the current check to the history (on the worker), when this build has one. */
     public void saveCheck() {
         if (services.checks() == null) {
-            message.set("saving checks needs the history and diagnosis stages, which this build lacks");
+            message.set("saving checks needs a history, which this window was not given");
             return;
         }
         LiveFrame f = frame.get();

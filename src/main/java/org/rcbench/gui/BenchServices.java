@@ -7,7 +7,7 @@ import java.util.concurrent.Executors;
 
 /**
  * The stages the window calls, gathered so tests can replace any of them. The optional ones are
- * null when this build lacks them; the window then says so instead of showing anything made up.
+ * null when the window is not given them; it then says so instead of showing anything made up.
  *
  * @param sources      makes live sources
  * @param expectations predicted values and bands for a design
@@ -25,12 +25,13 @@ public record BenchServices(SourceFactory sources, ExpectationSource expectation
     }
 
     /**
-     * Shared sources without stored calibrations, bands from the tolerance stage, one daemon worker
-     * thread; no diagnosis, tuning or history (add them with the {@code with...} methods).
+     * Shared sources without stored calibrations, bands from the tolerance stage, suspects and the
+     * trimmer guide from the diagnosis stage, one daemon worker thread; no history (add one with
+     * {@link #withChecks}).
      */
     public static BenchServices standard() {
         return new BenchServices(Sources.standard(org.rcbench.probe.CalibrationStore.none()),
-                new PredictedExpectations(), null, null, null, newWorker());
+                new PredictedExpectations(), new BackSolverFindings(), new BackSolverTuning(), null, newWorker());
     }
 
     /** One daemon thread named {@code rcbench-gui-worker}. */

@@ -37,7 +37,7 @@ public final class DiagnosisModel {
         this.source = source;
         this.slot = new BackgroundSlot<>(worker);
         available.set(source != null);
-        note.set(source == null ? "naming suspects needs the diagnosis stage, which this build lacks" : "");
+        note.set(source == null ? "naming suspects needs the diagnosis stage, which this window was not given" : "");
     }
 
     public ReadOnlyBooleanProperty availableProperty() {

@@ -1,5 +1,9 @@
 package org.rcbench.gui;
 
+import org.rcbench.diagnose.QuantityCheck;
+import org.rcbench.diagnose.Verdict;
+import org.rcbench.tolerance.Band;
+
 /**
  * How one live reading stands against the design, as a word that reads without colour. The view
  * adds a shape and a colour-blind-safe colour for each.
@@ -33,7 +37,9 @@ public enum ReadingState {
     /**
      * The state of measured value {@code v} against {@code e} (null when nothing is expected).
      * Waiting beats everything; settling beats any comparison, since a moving value is not yet the
-     * board's value.
+     * board's value. With a band, the verdict rule is the diagnosis stage's
+     * ({@link QuantityCheck#status}: inside the statistical band passes, inside the worst case is
+     * marginal, else it fails); with only a nominal value there is nothing to judge against.
      */
     public static ReadingState of(double v, Expected e, boolean settling) {
         if (Double.isNaN(v)) {
@@ -45,15 +51,15 @@ public enum ReadingState {
         if (e == null || Double.isNaN(e.nominal())) {
             return UNPREDICTED;
         }
-        if (e.hasStatistical() && e.inStatistical(v)) {
-            return IN_BAND;
+        if (!e.hasStatistical() && !e.hasWorstCase()) {
+            return NOMINAL_ONLY;
         }
-        if (e.hasWorstCase()) {
-            return e.inWorstCase(v) ? MARGINAL : OUTSIDE;
+        Verdict verdict = QuantityCheck.status(v, new Band(e.statLow(), e.statHigh()),
+                new Band(e.worstLow(), e.worstHigh()));
+        switch (verdict) {
+            case PASS: return IN_BAND;
+            case MARGINAL: return MARGINAL;
+            default: return OUTSIDE;
         }
-        if (e.hasStatistical()) {
-            return OUTSIDE;
-        }
-        return NOMINAL_ONLY;
     }
 }

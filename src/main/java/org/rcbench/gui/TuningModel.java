@@ -153,7 +153,7 @@ public final class TuningModel {
         }
         present.set(pot == null ? Double.NaN : present.get());
         if (pot != null && source == null) {
-            problem.set("the trimmer guide needs the diagnosis stage, which this build lacks");
+            problem.set("the trimmer guide needs the diagnosis stage, which this window was not given");
         }
         lastSerial = -1;
     }

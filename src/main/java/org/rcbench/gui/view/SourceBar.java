@@ -13,6 +13,7 @@ import javafx.scene.control.TextField;
 import javafx.scene.control.Tooltip;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
 import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
 import javafx.stage.FileChooser;
@@ -95,7 +96,6 @@ final class SourceBar extends VBox {
         Tooltip whole = new Tooltip();
         whole.textProperty().bind(line.textProperty());
         line.setTooltip(whole);
-        HBox.setHgrow(line, Priority.ALWAYS);
         line.setMaxWidth(Double.MAX_VALUE);
         Label probe = new Label();
         probe.setId("probe");
@@ -110,12 +110,20 @@ final class SourceBar extends VBox {
                 .then(Bindings.concat("● ", model.recordingTextProperty())).otherwise(""));
         rec.visibleProperty().bind(model.recordingProperty());
         rec.managedProperty().bind(model.recordingProperty());
-        HBox status = new HBox(10, mark, state, line, probe, clock, counts, rec);
+        for (Label l : new Label[] {state, probe, counts, rec}) {
+            l.setMinWidth(Region.USE_PREF_SIZE);
+        }
+        clock.setMaxWidth(Double.MAX_VALUE);
+        HBox.setHgrow(clock, Priority.SOMETIMES);
+        Tooltip clockTip = new Tooltip();
+        clockTip.textProperty().bind(clock.textProperty());
+        clock.setTooltip(clockTip);
+        HBox status = new HBox(10, mark, state, probe, clock, counts, rec);
         status.setAlignment(Pos.CENTER_LEFT);
         showStatus(model.statusProperty().get(), state, line, probe, clock, counts);
         model.statusProperty().addListener((o, was, now) -> showStatus(now, state, line, probe, clock, counts));
 
-        getChildren().addAll(controls, status);
+        getChildren().addAll(controls, status, line);
     }
 
     /** The choice the fields describe now. */

@@ -4,8 +4,6 @@ import java.util.Locale;
 import javafx.geometry.Insets;
 import javafx.scene.control.Button;
 import javafx.scene.control.Label;
-import javafx.scene.control.ListCell;
-import javafx.scene.control.ListView;
 import javafx.scene.layout.VBox;
 import org.rcbench.gui.BenchModel;
 import org.rcbench.gui.DiagnosisModel;
@@ -26,19 +24,11 @@ final class SuspectsPane extends VBox {
         Label note = wrapped("diagnosis-note");
         note.getStyleClass().add("note");
         note.textProperty().bind(d.noteProperty());
-        ListView<Suspect> list = new ListView<>(d.suspects());
+        VBox list = new VBox(4);
         list.setId("suspects");
-        list.setPrefHeight(150);
-        list.visibleProperty().bind(d.availableProperty());
-        list.managedProperty().bind(list.visibleProperty());
-        list.setCellFactory(v -> new ListCell<>() {
-            @Override
-            protected void updateItem(Suspect s, boolean empty) {
-                super.updateItem(s, empty);
-                setText(empty || s == null ? null : line(getIndex() + 1, s));
-                setWrapText(true);
-            }
-        });
+        list.getStyleClass().add("suspect-list");
+        d.suspects().addListener((javafx.collections.ListChangeListener<Suspect>) c -> fill(list, d));
+        fill(list, d);
         Label ambiguity = wrapped("ambiguity");
         ambiguity.textProperty().bind(d.ambiguityProperty());
         Label resolvers = wrapped("resolvers");
@@ -51,11 +41,33 @@ final class SuspectsPane extends VBox {
         getChildren().addAll(heading, verdict, note, list, ambiguity, resolvers, save);
     }
 
-    /** {@code 1. C1 68.2 nF (64.0 nF – 72.5 nF), −31.8 %, p 0.93}. */
+    private static void fill(VBox list, DiagnosisModel d) {
+        list.getChildren().clear();
+        int rank = 1;
+        for (Suspect s : d.suspects()) {
+            Label l = new Label(line(rank++, s));
+            l.setWrapText(true);
+            l.getStyleClass().add(rank == 2 ? "suspect-first" : "suspect");
+            list.getChildren().add(l);
+        }
+    }
+
+    /** {@code 1. C1  68.2 nF (64.0 nF – 72.5 nF), −31.8 % from nominal, p 0.930}. */
     static String line(int rank, Suspect s) {
-        String p = Double.isNaN(s.probability()) ? "" : String.format(Locale.ROOT, ", p %.2f", s.probability());
-        return rank + ". " + s.part() + "  " + s.estimate() + (s.interval().isEmpty() ? "" : " (" + s.interval() + ")")
-                + (s.deviation().isEmpty() ? "" : ", " + s.deviation()) + p;
+        StringBuilder sb = new StringBuilder().append(rank).append(". ").append(s.part());
+        if (!s.estimate().isEmpty()) {
+            sb.append("  ").append(s.estimate());
+            if (!s.interval().isEmpty()) {
+                sb.append(" (").append(s.interval()).append(')');
+            }
+        }
+        if (!s.deviation().isEmpty()) {
+            sb.append(", ").append(s.deviation());
+        }
+        if (!Double.isNaN(s.probability())) {
+            sb.append(s.probability() < 0.001 ? ", p < 0.001" : String.format(Locale.ROOT, ", p %.3f", s.probability()));
+        }
+        return sb.toString();
     }
 
     private static Label wrapped(String id) {
