@@ -13,7 +13,6 @@ import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
 import org.rcbench.common.BadInputException;
 import org.rcbench.design.Design;
-import org.rcbench.record.RecorderOptions;
 
 /**
  * The bench window's model: which source runs, what it measures, the design beside it, the
@@ -47,16 +46,13 @@ public final class BenchModel implements AutoCloseable {
     private final ReadOnlyBooleanWrapper running = new ReadOnlyBooleanWrapper(this, "running");
     private final ReadOnlyObjectWrapper<LiveFrame> frame = new ReadOnlyObjectWrapper<>(this, "frame");
     private final ReadOnlyIntegerWrapper averaging = new ReadOnlyIntegerWrapper(this, "averaging", 256);
-    private final ReadOnlyBooleanWrapper recording = new ReadOnlyBooleanWrapper(this, "recording");
-    private final ReadOnlyStringWrapper recordingText = new ReadOnlyStringWrapper(this, "recordingText", "");
     private final ReadOnlyStringWrapper message = new ReadOnlyStringWrapper(this, "message", "");
     private final ReadOnlyStringWrapper signalNote = new ReadOnlyStringWrapper(this, "signalNote", "");
     private final ReadOnlyBooleanWrapper safetyNoticeDue = new ReadOnlyBooleanWrapper(this, "safetyNoticeDue");
 
     private BenchSource source;
     private LivePipeline pipeline;
-    private Path recordingFile;
-    private Path lastRecording;
+    private final RecordingModel recording = new RecordingModel(message::set);
     private Design sourceDesign;
     private final BackgroundSlot<String> saving;
     private Expectation shownExpectation;
@@ -131,12 +127,12 @@ public final class BenchModel implements AutoCloseable {
     }
 
     public ReadOnlyBooleanProperty recordingProperty() {
-        return recording.getReadOnlyProperty();
+        return recording.recordingProperty();
     }
 
-    /** {@code REC piper.rce — 12 345 edges} while recording, else "". */
+    /** {@code REC piper.rce — 12,345 edges} while recording, else "". */
     public ReadOnlyStringProperty recordingTextProperty() {
-        return recordingText.getReadOnlyProperty();
+        return recording.textProperty();
     }
 
     /** The latest message for the user (a problem or a confirmation), or "". */
@@ -206,9 +202,7 @@ public final class BenchModel implements AutoCloseable {
 
     /** Stops the source (and a recording); the last readings stay on screen. */
     public void stop() {
-        if (recording.get()) {
-            stopRecording();
-        }
+        stopRecording();
         BenchSource s = source;
         source = null;
         if (s != null) {
@@ -260,38 +254,17 @@ public final class BenchModel implements AutoCloseable {
 
     /** Starts recording every edge to {@code file} (which must not exist). */
     public void startRecording(Path file) {
-        if (recording.get()) {
-            return;
-        }
-        LivePipeline p = pipeline;
-        if (p == null || !running.get()) {
-            message.set("start a source before recording");
-            return;
-        }
-        try {
-            p.startRecording(file, RecorderOptions.defaults(), status.get().probeId());
-        } catch (BadInputException e) {
-            message.set("not recording: " + e.getMessage());
-            return;
-        }
-        recordingFile = file;
-        recording.set(true);
-        recordingText.set("REC " + file.getFileName() + " — 0 edges");
-        message.set("recording to " + file);
+        recording.start(running.get() ? pipeline : null, file, status.get().probeId());
     }
 
     /** Stops the recording; the file is complete and closed when this returns. */
     public void stopRecording() {
-        if (!recording.get()) {
-            return;
-        }
-        long edges = pipeline.stopRecording();
-        finishRecording(edges < 0 ? "recording ended" : "recorded " + edges + " edges to " + recordingFile);
+        recording.stop(pipeline);
     }
 
     /** Starts recording to {@code file} or stops the running recording. */
     public void toggleRecording(Path file) {
-        if (recording.get()) {
+        if (recording.recordingProperty().get()) {
             stopRecording();
         } else {
             startRecording(file);
@@ -300,7 +273,7 @@ public final class BenchModel implements AutoCloseable {
 
     /** The file recorded last (or being recorded), or null. */
     public Path lastRecording() {
-        return recording.get() ? recordingFile : lastRecording;
+        return recording.lastFile();
     }
 
     /** Saves the current check to the history (on the worker), when this build has one. */
@@ -342,9 +315,7 @@ public final class BenchModel implements AutoCloseable {
             if (s != status.get() && (source != null || !s.state().isLive())) {
                 status.set(s);
                 if (!s.state().isLive() && s.state() != ConnectionState.IDLE) {
-                    if (recording.get() && p.recordedEdges() < 0) {
-                        finishRecording("recording ended with the source");
-                    }
+                    recording.refresh(p);
                     running.set(false);
                 }
             }
@@ -370,7 +341,7 @@ public final class BenchModel implements AutoCloseable {
             readings.update(frame.get(), shownExpectation, averaging.get());
             readoutDirty = false;
             lastReadout = nowNanos;
-            refreshRecording(p);
+            recording.refresh(p);
         }
         signalNote.set(quietNote(nowNanos));
         diagnosis.maybeRun(nowNanos, design.design(), frame.get(), averaging.get());
@@ -395,26 +366,6 @@ public final class BenchModel implements AutoCloseable {
         tuning.designChanged(d);
         diagnosis.clear();
         readoutDirty = true;
-    }
-
-    private void refreshRecording(LivePipeline p) {
-        if (!recording.get() || p == null) {
-            return;
-        }
-        String problem = p.recordingProblem();
-        long edges = p.recordedEdges();
-        if (edges < 0) {
-            finishRecording(problem.isEmpty() ? "recording ended" : "recording stopped: " + problem);
-            return;
-        }
-        recordingText.set(String.format(Locale.ROOT, "REC %s — %,d edges", recordingFile.getFileName(), edges));
-    }
-
-    private void finishRecording(String text) {
-        recording.set(false);
-        recordingText.set("");
-        lastRecording = recordingFile;
-        message.set(text);
     }
 
     private String quietNote(long now) {
