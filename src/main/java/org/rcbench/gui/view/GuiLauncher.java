@@ -47,6 +47,14 @@ public final class GuiLauncher {
         }
     }
 
+    /**
+     * JavaFX logs "Unsupported JavaFX configuration: classes were loaded from 'unnamed module'" when
+     * it runs from the class path, as rcbench's single jar does; harmless (rcbench has no module-info),
+     * so it is kept off the console. Held here so the logger keeps its level.
+     */
+    private static final java.util.logging.Logger PLATFORM_LOG =
+            java.util.logging.Logger.getLogger("javafx");
+
     private GuiLauncher() {
     }
 
@@ -123,6 +131,7 @@ public final class GuiLauncher {
             System.setProperty("prism.text", "t2k");
             System.setProperty("java.awt.headless", "true");
         }
+        PLATFORM_LOG.setLevel(java.util.logging.Level.SEVERE);
         CountDownLatch started = new CountDownLatch(1);
         try {
             Platform.startup(started::countDown);
