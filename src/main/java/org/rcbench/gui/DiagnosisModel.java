@@ -78,6 +78,11 @@ public final class DiagnosisModel {
             note.set("load a design to name suspects");
             return;
         }
+        if (!design.circuit().topology().isFreeRunning()
+                && design.circuit().topology() != org.rcbench.circuit.Topology.MONOSTABLE) {
+            note.set("a " + design.circuit().topology().fileName() + " has no timing to back-solve");
+            return;
+        }
         if (frame == null || frame.measurement().cycles() < MIN_CYCLES) {
             note.set("waiting for " + MIN_CYCLES + " cycles");
             return;
