@@ -27,6 +27,7 @@ import picocli.CommandLine.Spec;
             HistoryCommand.class,
             ReportCommand.class,
             ExportCommand.class,
+            GuiCommand.class,
         })
 public final class RcbenchCommand implements Callable<Integer> {
     @Spec
