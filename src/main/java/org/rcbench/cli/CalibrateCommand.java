@@ -58,11 +58,11 @@ public final class CalibrateCommand implements Callable<Integer> {
     double referencePpm;
 
     @Option(names = "--duration", paramLabel = "TIME", defaultValue = "60s", converter = ValueConverters.Time.class,
-            description = "How long to measure, probe time (default ${DEFAULT-VALUE}); longer averages down the noise.")
+            description = "How long to measure, probe time (default: ${DEFAULT-VALUE}); longer averages down the noise.")
     double duration;
 
     @Option(names = "--channel", paramLabel = "N", defaultValue = "0",
-            description = "The channel the reference is on (default ${DEFAULT-VALUE}).")
+            description = "The channel the reference is on (default: ${DEFAULT-VALUE}).")
     int channel;
 
     @Option(names = "--probe-id", paramLabel = "HEX",

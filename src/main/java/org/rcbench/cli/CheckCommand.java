@@ -28,7 +28,7 @@ import picocli.CommandLine.Spec;
 @Command(name = "check", mixinStandardHelpOptions = true,
         description = {"Check a board: measure the capture, compare with the design's predicted bands, and back-solve"
             + " which part is off.",
-            "Verdict: pass (inside the 95 % band), marginal (inside the worst case), fail, or stopped (not running).",
+            "Verdict: pass (inside the 95 %% band), marginal (inside the worst case), fail, or stopped (not running).",
             "Exit status 0 for pass or marginal, 1 for fail or stopped, 2 for bad input."})
 public final class CheckCommand implements Callable<Integer> {
     @Spec
@@ -48,10 +48,10 @@ public final class CheckCommand implements Callable<Integer> {
     boolean json;
 
     @Option(names = "--draws", paramLabel = "N", defaultValue = "100000",
-            description = "Monte Carlo draws for the statistical band (default ${DEFAULT-VALUE}).")
+            description = "Monte Carlo draws for the statistical band (default: ${DEFAULT-VALUE}).")
     int draws;
 
-    @Option(names = "--seed", paramLabel = "S", defaultValue = "1", description = "Monte Carlo seed (default ${DEFAULT-VALUE}).")
+    @Option(names = "--seed", paramLabel = "S", defaultValue = "1", description = "Monte Carlo seed (default: ${DEFAULT-VALUE}).")
     long seed;
 
     @Override

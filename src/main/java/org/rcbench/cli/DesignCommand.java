@@ -28,8 +28,8 @@ import picocli.CommandLine.Spec;
 
 /** {@code rcbench design}: propose part sets from preferred series for a target timing. */
 @Command(name = "design", mixinStandardHelpOptions = true,
-        description = {"Propose timing parts from preferred-value series for a target frequency and duty,",
-            "pulse width, or PWM duty range; ranked by predicted error and spread, each with its bands."})
+        description = {"Propose timing parts from preferred-value series for a target frequency and duty, pulse"
+            + " width, or PWM duty range; ranked by predicted error and spread, each with its bands."})
 public final class DesignCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
@@ -38,7 +38,7 @@ public final class DesignCommand implements Callable<Integer> {
             description = "monostable, astable, astable-one-diode, astable-two-diode, astable-output-fed or pwm-pot.")
     String topology;
 
-    @Option(names = "--family", defaultValue = "bipolar", paramLabel = "NAME", description = "bipolar or cmos (default ${DEFAULT-VALUE}).")
+    @Option(names = "--family", defaultValue = "bipolar", paramLabel = "NAME", description = "bipolar or cmos (default: ${DEFAULT-VALUE}).")
     String family;
 
     @Option(names = "--supply", required = true, paramLabel = "VOLTS", converter = ValueConverters.Voltage.class,
@@ -50,7 +50,7 @@ public final class DesignCommand implements Callable<Integer> {
     Double frequency;
 
     @Option(names = "--duty", paramLabel = "FRACTION", converter = ValueConverters.Fraction.class,
-            description = "Target duty cycle, 0.6 or 60% (astables).")
+            description = "Target duty cycle, e.g. 0.6 or 60%% (astables).")
     Double duty;
 
     @Option(names = "--pulse", paramLabel = "SECONDS", converter = ValueConverters.Time.class,
@@ -58,39 +58,39 @@ public final class DesignCommand implements Callable<Integer> {
     Double pulse;
 
     @Option(names = "--duty-min", paramLabel = "FRACTION", converter = ValueConverters.Fraction.class,
-            defaultValue = "0.05", description = "PWM duty with the wiper at the discharge end (default ${DEFAULT-VALUE}).")
+            defaultValue = "0.05", description = "PWM duty with the wiper at the discharge end (default: ${DEFAULT-VALUE}).")
     double dutyMin;
 
     @Option(names = "--duty-max", paramLabel = "FRACTION", converter = ValueConverters.Fraction.class,
-            defaultValue = "0.95", description = "PWM duty with the wiper at the charge end (default ${DEFAULT-VALUE}).")
+            defaultValue = "0.95", description = "PWM duty with the wiper at the charge end (default: ${DEFAULT-VALUE}).")
     double dutyMax;
 
     @Option(names = "--series", paramLabel = "E24", converter = ValueConverters.Series.class, defaultValue = "E24",
-            description = "Series for resistors (default ${DEFAULT-VALUE}).")
+            description = "Series for resistors (default: ${DEFAULT-VALUE}).")
     PreferredSeries series;
 
     @Option(names = "--cap-series", paramLabel = "E6", converter = ValueConverters.Series.class, defaultValue = "E6",
-            description = "Series for the timing capacitor (default ${DEFAULT-VALUE}).")
+            description = "Series for the timing capacitor (default: ${DEFAULT-VALUE}).")
     PreferredSeries capSeries;
 
     @Option(names = "--tolerance", paramLabel = "PERCENT", converter = ValueConverters.ToleranceBand.class,
-            description = "Resistor tolerance (default: the series' usual one, E24 5%).")
+            description = "Resistor tolerance (default: the series' usual one, e.g. 5%% for E24).")
     Tolerance tolerance;
 
     @Option(names = "--cap-tolerance", paramLabel = "PERCENT", converter = ValueConverters.ToleranceBand.class,
-            defaultValue = "10%", description = "Capacitor tolerance (default ${DEFAULT-VALUE}).")
+            defaultValue = "10%", description = "Capacitor tolerance (default: ${DEFAULT-VALUE}).")
     Tolerance capTolerance;
 
     @Option(names = "--pot-tolerance", paramLabel = "PERCENT", converter = ValueConverters.ToleranceBand.class,
-            defaultValue = "20%", description = "Potentiometer tolerance (default ${DEFAULT-VALUE}).")
+            defaultValue = "20%", description = "Potentiometer tolerance (default: ${DEFAULT-VALUE}).")
     Tolerance potTolerance;
 
     @Option(names = "--diode", paramLabel = "KIND", defaultValue = "silicon",
-            description = "silicon or schottky (default ${DEFAULT-VALUE}).")
+            description = "silicon or schottky (default: ${DEFAULT-VALUE}).")
     String diode;
 
     @Option(names = "--min-resistance", paramLabel = "OHMS", converter = ValueConverters.Resistance.class,
-            defaultValue = "1k", description = "Smallest timing resistor (default ${DEFAULT-VALUE}; common practice).")
+            defaultValue = "1k", description = "Smallest timing resistor (default: ${DEFAULT-VALUE}; common practice).")
     double minOhms;
 
     @Option(names = "--max-resistance", paramLabel = "OHMS", converter = ValueConverters.Resistance.class,
@@ -98,14 +98,14 @@ public final class DesignCommand implements Callable<Integer> {
     Double maxOhms;
 
     @Option(names = "--min-cap", paramLabel = "FARADS", converter = ValueConverters.Capacitance.class,
-            defaultValue = "100p", description = "Smallest timing capacitor (default ${DEFAULT-VALUE}).")
+            defaultValue = "100p", description = "Smallest timing capacitor (default: ${DEFAULT-VALUE}).")
     double minFarads;
 
     @Option(names = "--max-cap", paramLabel = "FARADS", converter = ValueConverters.Capacitance.class,
-            defaultValue = "100u", description = "Largest timing capacitor (default ${DEFAULT-VALUE}).")
+            defaultValue = "100u", description = "Largest timing capacitor (default: ${DEFAULT-VALUE}).")
     double maxFarads;
 
-    @Option(names = "--count", paramLabel = "N", defaultValue = "5", description = "Candidates to list (default ${DEFAULT-VALUE}).")
+    @Option(names = "--count", paramLabel = "N", defaultValue = "5", description = "Candidates to list (default: ${DEFAULT-VALUE}).")
     int count;
 
     @Option(names = "--save", paramLabel = "FILE", description = "Write the best candidate as a design file.")

@@ -15,8 +15,8 @@ import picocli.CommandLine.Spec;
 /** {@code rcbench export cycles CAPTURE}: one CSV record per cycle of one channel. */
 @Command(name = "cycles", mixinStandardHelpOptions = true,
         description = {"Write the cycles of one channel of a capture as CSV.",
-            "One record per cycle, rising edge to rising edge: cycle, start_tick, start_s, period_s, high_s,",
-            "low_s, duty. No cycle spans a gap; settling cycles and glitches are kept (the raw cycle list)."})
+            "One record per cycle, rising edge to rising edge: cycle, start_tick, start_s, period_s, high_s, low_s,"
+                + " duty. No cycle spans a gap; settling cycles and glitches are kept (the raw cycle list)."})
 public final class ExportCyclesCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;

@@ -25,8 +25,8 @@ import picocli.CommandLine.Spec;
 /** {@code rcbench export measurements RUN|--last|--from-json FILE}: measured quantities as CSV. */
 @Command(name = "measurements", mixinStandardHelpOptions = true,
         description = {"Write the measurements of a stored run as CSV.",
-            "Columns: quantity, value, uncertainty (expanded), unit, coverage_factor. --from-json reads",
-            "the output of rcbench measure --json or check --json instead of the history."})
+            "Columns: quantity, value, uncertainty (expanded), unit, coverage_factor.",
+            "--from-json reads the output of rcbench measure --json or check --json instead of the history."})
 public final class ExportMeasurementsCommand implements Callable<Integer> {
     /** The header record. */
     public static final String[] HEADER = {"quantity", "value", "uncertainty", "unit", "coverage_factor"};

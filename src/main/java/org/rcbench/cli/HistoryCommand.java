@@ -43,8 +43,8 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "history", mixinStandardHelpOptions = true,
         description = {"List stored checks and the trend of each estimated part.",
-            "For each unit and part: the least-squares drift per year with its standard error, and when",
-            "the fitted line leaves the part's tolerance band (with a 95 % range), or why that is not said."})
+            "For each unit and part: the least-squares drift per year with its standard error, and when the fitted"
+                + " line leaves the part's tolerance band (with a 95 %% range), or why that is not said."})
 public final class HistoryCommand implements Callable<Integer> {
     private static final DateTimeFormatter MINUTE =
             DateTimeFormatter.ofPattern("uuuu-MM-dd HH:mm", Locale.ROOT).withZone(ZoneOffset.UTC);

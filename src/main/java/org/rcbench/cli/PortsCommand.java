@@ -21,7 +21,7 @@ public final class PortsCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Parameters(arity = "0..*", paramLabel = "DEVICE", description = "device paths to check, e.g. /dev/ttyUSB0")
+    @Parameters(arity = "0..*", paramLabel = "DEVICE", description = "Device paths to check, e.g. /dev/ttyUSB0.")
     List<String> devices = List.of();
 
     @Override

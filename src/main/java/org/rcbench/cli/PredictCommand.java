@@ -21,8 +21,8 @@ import picocli.CommandLine.Spec;
 
 /** {@code rcbench predict DESIGN}: what the design should do, with worst-case and statistical bands. */
 @Command(name = "predict", mixinStandardHelpOptions = true,
-        description = {"Predict a design's timing: nominal, worst case over the tolerances, and the 95 % band",
-            "from a Monte Carlo run (JCGM 101), with warnings where the design leaves practical limits."})
+        description = {"Predict a design's timing: nominal, worst case over the tolerances, and the 95 %% band from a"
+            + " Monte Carlo run (JCGM 101), with warnings where the design leaves practical limits."})
 public final class PredictCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
@@ -34,10 +34,10 @@ public final class PredictCommand implements Callable<Integer> {
     boolean json;
 
     @Option(names = "--draws", paramLabel = "N", defaultValue = "100000",
-            description = "Monte Carlo draws (default ${DEFAULT-VALUE}).")
+            description = "Monte Carlo draws (default: ${DEFAULT-VALUE}).")
     int draws;
 
-    @Option(names = "--seed", paramLabel = "S", defaultValue = "1", description = "Monte Carlo seed (default ${DEFAULT-VALUE}).")
+    @Option(names = "--seed", paramLabel = "S", defaultValue = "1", description = "Monte Carlo seed (default: ${DEFAULT-VALUE}).")
     long seed;
 
     @Override

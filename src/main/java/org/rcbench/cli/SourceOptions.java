@@ -68,19 +68,19 @@ public final class SourceOptions {
     String warmUp;
 
     @Option(names = "--seed", paramLabel = "N", defaultValue = "1",
-            description = "Simulated board: seed of every random draw (default ${DEFAULT-VALUE}).")
+            description = "Simulated board: seed of every random draw (default: ${DEFAULT-VALUE}).")
     long seed;
 
     @Option(names = "--sim-speed", paramLabel = "realtime|fast", defaultValue = "realtime",
-            description = "Simulated board or replay: real time, or as fast as it can be read (default ${DEFAULT-VALUE}).")
+            description = "Simulated board or replay: real time, or as fast as it can be read (default: ${DEFAULT-VALUE}).")
     String speed;
 
     @Option(names = "--sim-clock-ppm", paramLabel = "PPM", defaultValue = "0",
-            description = "Simulated probe: how fast its clock really runs, ppm (default ${DEFAULT-VALUE}).")
+            description = "Simulated probe: how fast its clock really runs, ppm (default: ${DEFAULT-VALUE}).")
     double clockPpm;
 
     @Option(names = "--sim-clock-hz", paramLabel = "HZ", defaultValue = "16000000",
-            description = "Simulated probe: its tick frequency (default ${DEFAULT-VALUE}).")
+            description = "Simulated probe: its tick frequency, Hz (default: ${DEFAULT-VALUE}).")
     long clockHz;
 
     @Option(names = "--sim-trigger-every", paramLabel = "TIME", converter = ValueConverters.Time.class,

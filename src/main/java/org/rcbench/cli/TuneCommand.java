@@ -53,7 +53,7 @@ public final class TuneCommand implements Callable<Integer> {
         Double frequency;
 
         @Option(names = "--duty", paramLabel = "FRACTION", converter = ValueConverters.Fraction.class,
-                description = "Target duty cycle, e.g. 0.3 or 30%.")
+                description = "Target duty cycle, e.g. 0.3 or 30%%.")
         Double duty;
 
         @Option(names = "--pulse-width", paramLabel = "TIME", converter = ValueConverters.Time.class,

@@ -61,7 +61,7 @@ public final class WatchCommand implements Callable<Integer> {
     boolean plain;
 
     @Option(names = "--channel", paramLabel = "N", defaultValue = "0",
-            description = "The timer's output channel (default ${DEFAULT-VALUE}; a monostable's trigger on N+1, a"
+            description = "The timer's output channel (default: ${DEFAULT-VALUE}; a monostable's trigger on N+1, a"
                 + " latch's buttons on N+1 and N+2).")
     int channel;
 
