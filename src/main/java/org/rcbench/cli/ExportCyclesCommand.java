@@ -34,10 +34,10 @@ public final class ExportCyclesCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         PrintWriter err = spec.commandLine().getErr();
         try (Capture c = CaptureFiles.open(capture)) {
-            int ch = CaptureChannel.of(c, channel);
+            int ch = CaptureOptions.channel(Channels.of(c), channel);
             CycleCsv.Summary[] summary = new CycleCsv.Summary[1];
             OutputFile.text(output, spec.commandLine().getOut(), w -> summary[0] = CycleCsv.write(c, ch, w));
-            CaptureChannel.warn(c, err);
+            CaptureOptions.warn(c, err);
             if (!OutputFile.isStdout(output)) {
                 err.println("rcbench: " + summary[0].cycles() + " cycles of channel " + ch + " written to " + output
                         + (summary[0].gaps() == 1 ? " (1 gap: no cycle spans it)"

@@ -88,9 +88,7 @@ public final class MeasureCommand implements Callable<Integer> {
             }
             capture.streamTo(new FanOut(sinks.toArray(new EdgeSink[0])));
             Measurement m = meter.result();
-            for (String w : capture.warnings()) {
-                err.println("rcbench: warning: " + w);
-            }
+            CaptureOptions.warn(capture, err);
             if (json) {
                 ObjectNode o = MeasurementJson.of(m);
                 o.put("capture", capture.name());

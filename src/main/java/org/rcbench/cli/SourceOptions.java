@@ -71,9 +71,13 @@ public final class SourceOptions {
             description = "Simulated board: seed of every random draw (default: ${DEFAULT-VALUE}).")
     long seed;
 
-    @Option(names = "--sim-speed", paramLabel = "realtime|fast", defaultValue = "realtime",
-            description = "Simulated board or replay: real time, or as fast as it can be read (default: ${DEFAULT-VALUE}).")
+    @Option(names = "--sim-speed", paramLabel = "realtime|fast",
+            description = "Simulated board or replay: real time, or as fast as it can be read (default: realtime; for"
+                + " check and tune, which want the answer rather than the wait: fast).")
     String speed;
+
+    /** The pace when {@code --sim-speed} is not given. */
+    private Pace unsetPace = Pace.REALTIME;
 
     @Option(names = "--sim-clock-ppm", paramLabel = "PPM", defaultValue = "0",
             description = "Simulated probe: how fast its clock really runs, ppm (default: ${DEFAULT-VALUE}).")
@@ -175,7 +179,47 @@ public final class SourceOptions {
     }
 
     Pace pace() {
-        return Pace.parse(speed);
+        return speed == null ? unsetPace : Pace.parse(speed);
+    }
+
+    /** Makes a simulated board or a replay run as fast as it can be read unless {@code --sim-speed} says otherwise. */
+    void preferFast() {
+        unsetPace = Pace.FAST;
+    }
+
+    /**
+     * The source options given on the command line, by name (options left at their defaults are
+     * not told apart from options not given, which makes no difference to the source).
+     */
+    List<String> given() {
+        List<String> g = new ArrayList<>();
+        String[][] named = {{"--port", port}, {"--sim", sim}, {"--ripple", ripple}, {"--warm-up", warmUp},
+            {"--sim-speed", speed}};
+        for (String[] n : named) {
+            if (n[1] != null) {
+                g.add(n[0]);
+            }
+        }
+        if (replay != null) {
+            g.add("--replay");
+        }
+        if (!probeType.equals(ProbeProfile.RESET_ON_OPEN.name())) {
+            g.add("--probe-type");
+        }
+        if (!faults.isEmpty()) {
+            g.add("--fault");
+        }
+        if (jitterSeconds != 0) {
+            g.add("--jitter");
+        }
+        if (seed != 1) {
+            g.add("--seed");
+        }
+        if (clockPpm != 0 || clockHz != 16_000_000L || triggerEvery != null || byteErrors != 0 || lostBytes != 0
+                || overruns != 0 || !unplugs.isEmpty()) {
+            g.add("--sim-...");
+        }
+        return g;
     }
 
     private SimulationSpec simulation() {
