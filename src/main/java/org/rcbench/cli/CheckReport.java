@@ -36,8 +36,10 @@ final class CheckReport {
         sb.append(r.verdict().name()).append("  ").append(r.design().title()).append(": ").append(r.reason()).append('\n');
         Measurement m = r.measurement();
         long n = pulses >= 0 ? pulses : m.cycles();
-        sb.append(String.format(Locale.ROOT, "(%s: %d %s%s in %s; design %s)%n", source, n, pulses >= 0 ? "pulse" : "cycle",
-                n == 1 ? "" : "s", SiFormat.format(m.spanSeconds(), "s", 3), r.design().source()));
+        String span = Double.isFinite(m.spanSeconds()) && m.spanSeconds() > 0
+                ? " in " + SiFormat.format(m.spanSeconds(), "s", 3) : "";
+        sb.append(String.format(Locale.ROOT, "(%s: %d %s%s%s; design %s)%n", source, n, pulses >= 0 ? "pulse" : "cycle",
+                n == 1 ? "" : "s", span, r.design().source()));
         if (!r.checks().isEmpty()) {
             sb.append('\n');
             sb.append(String.format(Locale.ROOT, "%-12s %-24s %-12s %-24s %-24s %s%n", "", "measured", "nominal",

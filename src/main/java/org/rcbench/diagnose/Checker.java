@@ -137,7 +137,7 @@ public final class Checker {
         StringBuilder sb = new StringBuilder(monostable ? "not running: no complete output pulse was measured"
                 : "not running: no complete cycle was measured");
         sb.append(m.edges() == 0 ? " (no edge on channel " + m.channel() + ")"
-                : " (" + m.edges() + " edges on channel " + m.channel() + ")");
+                : " (" + m.edges() + (m.edges() == 1 ? " edge" : " edges") + " on channel " + m.channel() + ")");
         if (!prediction.runs()) {
             sb.append("; the design itself should not run: ").append(prediction.reason());
         } else {
