@@ -57,7 +57,7 @@ final class BoardInput {
     Path file;
 
     @Option(names = "--design", paramLabel = "DESIGN",
-            description = "The board's design: a file (TOML) or demo:NAME (default with --sim: the simulated board's"
+            description = "The board's design: a file (TOML) or demo:NAME (default: with --sim, the simulated board's"
                 + " own design).")
     String design;
 
