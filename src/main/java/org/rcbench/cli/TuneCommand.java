@@ -61,10 +61,12 @@ public final class TuneCommand implements Callable<Integer> {
     String pot;
 
     @Option(names = "--travel-degrees", paramLabel = "DEG",
-            description = "The pot's mechanical travel in degrees (e.g. 270), to state the turn in degrees.")
+            description = "The pot's mechanical travel in degrees (e.g. 270), to state the turn in degrees (default: the"
+                + " design file's travel of the pot, if given).")
     Double travelDegrees;
 
-    @Option(names = "--turns", paramLabel = "N", description = "The pot's number of turns (a multi-turn trimmer).")
+    @Option(names = "--turns", paramLabel = "N",
+            description = "The pot's number of turns (a multi-turn trimmer; default: the design file's travel, if given).")
     Double turns;
 
     @Option(names = "--json", description = "Print the result as JSON.")
