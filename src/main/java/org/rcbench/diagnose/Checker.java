@@ -108,12 +108,26 @@ public final class Checker {
     }
 
     private void add(List<QuantityCheck> out, TimingQuantity q, double measured, double u) {
+        QuantityCheck c = judge(q, measured, u);
+        if (c != null) {
+            out.add(c);
+        }
+    }
+
+    /**
+     * One quantity against the prediction, by the rules of {@link QuantityCheck#status} (what a
+     * live view judges its newest figures by); null when the prediction has no band for {@code q}
+     * or {@code measured} is not a number.
+     *
+     * @param u the expanded uncertainty (k = 2) of {@code measured}, or NaN
+     */
+    public QuantityCheck judge(TimingQuantity q, double measured, double u) {
         if (!prediction.quantities().contains(q) || !Double.isFinite(measured)) {
-            return;
+            return null;
         }
         Band stat = prediction.statistical(q);
         Band wc = prediction.worstCase(q);
-        out.add(new QuantityCheck(q, measured, u, prediction.nominal(q), stat, wc, QuantityCheck.status(measured, stat, wc)));
+        return new QuantityCheck(q, measured, u, prediction.nominal(q), stat, wc, QuantityCheck.status(measured, stat, wc));
     }
 
     private String reason(Verdict v, QuantityCheck worst) {

@@ -126,7 +126,7 @@ public final class CheckJson {
         return o;
     }
 
-    /** The {@code tune --json} object: the wiper now, where it should go, and the advice. */
+    /** The {@code tune --json} object: the wiper now, where it should go, and the advice (also as one short {@code step}). */
     public static ObjectNode of(TuneResult t) {
         ObjectNode o = F.objectNode();
         o.put("pot", t.pot());
@@ -145,6 +145,7 @@ public final class CheckJson {
         put(o, "travel_degrees", t.target().travelDegrees());
         put(o, "turns", t.target().turns());
         o.put("advice", t.advice());
+        o.put("step", t.step());
         return o;
     }
 
