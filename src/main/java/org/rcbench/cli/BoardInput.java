@@ -165,7 +165,7 @@ final class BoardInput {
 
     private Reading readLive(PrintWriter err, DatabaseOption db) throws InterruptedException {
         SourceSpec spec = source.sourceSpec();
-        LiveSource src = source.open(err, SourceOptions.calibrations(db), spec);
+        LiveSource src = source.open(err, db.calibrations(), spec);
         double seconds = duration != null ? duration : defaultSeconds(src);
         DurationGate gate = new DurationGate(seconds);
         AtomicReference<CaptureMeasurement.Meters> meters = new AtomicReference<>();

@@ -47,7 +47,7 @@ public final class MeasureCommand implements Callable<Integer> {
     @Option(names = "--reset-channel", paramLabel = "N|NAME", description = "Bistable: the reset button input.")
     String resetChannel;
 
-    @Option(names = "--bounce-window", paramLabel = "TIME", defaultValue = "20ms", converter = SecondsConverter.class,
+    @Option(names = "--bounce-window", paramLabel = "TIME", defaultValue = "20ms", converter = ValueConverters.TimeOrZero.class,
             description = "Bistable: edges this soon after a press or release are bounce (default: ${DEFAULT-VALUE}).")
     double bounceWindowSeconds;
 

@@ -16,7 +16,6 @@ import org.rcbench.sim.ProbeOptions;
 import org.rcbench.sim.SimulationSpec;
 import org.rcbench.sim.Stimulus;
 import org.rcbench.source.DemoDesigns;
-import org.rcbench.source.HistoryCalibrations;
 import org.rcbench.source.LiveSource;
 import org.rcbench.source.SourceSpec;
 import org.rcbench.units.Unit;
@@ -54,7 +53,7 @@ public final class SourceOptions {
                 + " control=4k7, supply=7.2V (repeatable).")
     List<String> faults = new ArrayList<>();
 
-    @Option(names = "--jitter", paramLabel = "TIME", converter = SecondsConverter.class,
+    @Option(names = "--jitter", paramLabel = "TIME", converter = ValueConverters.TimeOrZero.class,
             description = "Simulated board: white period noise, RMS (e.g. 2us).")
     double jitterSeconds;
 
@@ -157,14 +156,6 @@ public final class SourceOptions {
             err.flush();
         }
         return LiveSource.of(spec, sessionConfig(), store);
-    }
-
-    /** The probe calibrations kept in the history that {@code --db} names (checking {@code --db-wait}). */
-    static HistoryCalibrations calibrations(DatabaseOption db) {
-        if (!(db.waitSeconds >= 0) || db.waitSeconds > 86_400) {
-            throw new BadInputException("--db-wait", "must be 0 to 86400 seconds, not " + db.waitSeconds);
-        }
-        return HistoryCalibrations.at(db.path(), (int) Math.round(db.waitSeconds * 1000));
     }
 
     /** The session configuration: the defaults, with a faster reconnect poll for simulated probes. */

@@ -10,7 +10,6 @@ import org.rcbench.source.DemoDesigns;
 import org.rcbench.source.DurationGate;
 import org.rcbench.source.LiveMeasurement;
 import org.rcbench.source.LiveReading;
-import org.rcbench.source.HistoryCalibrations;
 import org.rcbench.source.LiveSource;
 import org.rcbench.source.SourceSpec;
 import org.rcbench.source.StreamStart;
@@ -85,7 +84,7 @@ public final class WatchCommand implements Callable<Integer> {
                 : sourceSpec instanceof SourceSpec.Simulated sim ? sim.design() : null;
         WatchJudge judge = d == null ? null : new WatchJudge(d, new Predictor(20_000, 1).predict(d));
         Topology topology = d == null ? null : d.circuit().topology();
-        LiveSource src = source.open(err, calibrations(), sourceSpec);
+        LiveSource src = source.open(err, database.calibrations(), sourceSpec);
         // A fast source with --once reads a fixed stretch of probe time, so that the readout is repeatable.
         Double span = duration != null ? duration : once && source.fast() ? (Double) FAST_ONCE_SECONDS : null;
         DurationGate gate = new DurationGate(span == null ? Double.POSITIVE_INFINITY : span);
@@ -149,10 +148,5 @@ public final class WatchCommand implements Callable<Integer> {
             return r.monostable().pulses() >= 1;
         }
         return r.measurement().rolling().cycles() >= ONCE_CYCLES;
-    }
-
-    /** The probe calibrations in the history ({@code --db}). */
-    private HistoryCalibrations calibrations() {
-        return SourceOptions.calibrations(database);
     }
 }
