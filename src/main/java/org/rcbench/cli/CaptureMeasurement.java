@@ -5,8 +5,8 @@ import java.util.concurrent.TimeUnit;
 import org.rcbench.edge.EdgeSink;
 import org.rcbench.edge.Timebase;
 import org.rcbench.measure.CycleMeter;
-import org.rcbench.measure.MonostableMeter;
 import org.rcbench.measure.MonostableMeter.MonostableResult;
+import org.rcbench.measure.MonostableMeter;
 
 /**
  * A capture (a file, or a live stream; see {@link BoardInput}) read through the cycle meter, and through the monostable

@@ -15,6 +15,7 @@ import org.rcbench.circuit.Topology;
 import org.rcbench.common.BadInputException;
 import org.rcbench.design.Design;
 import org.rcbench.design.DesignText;
+import org.rcbench.diagnose.Words;
 import org.rcbench.picker.Candidate;
 import org.rcbench.picker.PartPicker;
 import org.rcbench.picker.PickRequest;
@@ -172,13 +173,13 @@ public final class DesignCommand implements Callable<Integer> {
                 errs.append(errs.length() == 0 ? "" : ", ").append(e.getKey()).append(' ')
                         .append(String.format(Locale.ROOT, "%+.2f %%", e.getValue() * 100));
             }
-            sb.append(String.format(Locale.ROOT, "   %s %s", label(main), PredictCommand.value(main, p.nominal(main))));
+            sb.append(String.format(Locale.ROOT, "   %s %s", label(main), Words.value(main, p.nominal(main))));
             if (p.quantities().contains(TimingQuantity.DUTY) && r.topology() != Topology.MONOSTABLE) {
-                sb.append(", duty ").append(PredictCommand.value(TimingQuantity.DUTY, p.nominal(TimingQuantity.DUTY)));
+                sb.append(", duty ").append(Words.value(TimingQuantity.DUTY, p.nominal(TimingQuantity.DUTY)));
             }
             sb.append(String.format(Locale.ROOT, "; error %s; spread %.2f %% (1 σ)%n", errs, c.spread() * 100));
             sb.append(String.format(Locale.ROOT, "   worst case %s; 95 %% %s%n",
-                    PredictCommand.band(main, p.worstCase(main)), PredictCommand.band(main, p.statistical(main))));
+                    Words.band(main, p.worstCase(main)), Words.band(main, p.statistical(main))));
             for (String w : p.warnings()) {
                 sb.append("   note: ").append(w).append('\n');
             }
@@ -196,14 +197,14 @@ public final class DesignCommand implements Callable<Integer> {
     private static String goal(PickRequest r) {
         switch (r.topology()) {
             case MONOSTABLE:
-                return "pulse " + PredictCommand.value(TimingQuantity.PULSE_WIDTH, r.pulseSeconds());
+                return "pulse " + Words.value(TimingQuantity.PULSE_WIDTH, r.pulseSeconds());
             case PWM_POT:
                 return String.format(Locale.ROOT, "%s, duty %.0f %% to %.0f %%",
-                        PredictCommand.value(TimingQuantity.FREQUENCY, r.frequencyHz()), r.dutyMin() * 100, r.dutyMax() * 100);
+                        Words.value(TimingQuantity.FREQUENCY, r.frequencyHz()), r.dutyMin() * 100, r.dutyMax() * 100);
             case OUTPUT_FED:
-                return PredictCommand.value(TimingQuantity.FREQUENCY, r.frequencyHz());
+                return Words.value(TimingQuantity.FREQUENCY, r.frequencyHz());
             default:
-                return PredictCommand.value(TimingQuantity.FREQUENCY, r.frequencyHz())
+                return Words.value(TimingQuantity.FREQUENCY, r.frequencyHz())
                         + (Double.isNaN(r.duty()) ? "" : String.format(Locale.ROOT, " at %.1f %% duty", r.duty() * 100));
         }
     }

@@ -9,9 +9,9 @@ import org.rcbench.serial.PortAccess;
 import org.rcbench.serial.PortInfo;
 import org.rcbench.serial.SerialPorts;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
-import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code rcbench ports [DEVICE...]}: lists serial ports, or checks the given devices, and says how to get access. */
 @Command(name = "ports", mixinStandardHelpOptions = true,

@@ -2,8 +2,8 @@ package org.rcbench.cli;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.rcbench.circuit.ElementType;
 import org.rcbench.circuit.Element;
+import org.rcbench.circuit.ElementType;
 import org.rcbench.circuit.Role;
 import org.rcbench.circuit.TimingQuantity;
 import org.rcbench.circuit.Topology;

@@ -11,6 +11,7 @@ import org.rcbench.diagnose.FaultKind;
 import org.rcbench.diagnose.QuantityCheck;
 import org.rcbench.diagnose.Suspect;
 import org.rcbench.diagnose.Verdict;
+import org.rcbench.diagnose.Words;
 import org.rcbench.measure.BistableMeter.BistableResult;
 import org.rcbench.measure.Measurement;
 import org.rcbench.measure.MonostableMeter.MonostableResult;
@@ -162,15 +163,15 @@ final class WatchView {
 
     /** One quantity's row, with its verdict when the judge compared it. */
     private static void row(List<String> lines, TimingQuantity q, double value, WatchJudge.Judgement j) {
-        String measured = PredictCommand.value(q, value);
+        String measured = Words.value(q, value);
         QuantityCheck c = j == null ? null : j.row(q);
         if (c == null) {
             lines.add(String.format(Locale.ROOT, ROW, label(q), measured, "", "", "").stripTrailing());
             return;
         }
         String verdict = c.status().fileName() + (c.status() == Verdict.PASS ? "" : " (" + offset(c) + ")");
-        lines.add(String.format(Locale.ROOT, ROW, label(q), measured, PredictCommand.value(q, c.nominal()),
-                PredictCommand.band(q, c.statistical()), verdict).stripTrailing());
+        lines.add(String.format(Locale.ROOT, ROW, label(q), measured, Words.value(q, c.nominal()),
+                Words.band(q, c.statistical()), verdict).stripTrailing());
     }
 
     /** The deviation from nominal, e.g. {@code +33.3 %} (duty: {@code +9.85 % pts}). */

@@ -12,8 +12,8 @@ import org.jsoup.nodes.Element;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.rcbench.history.CheckContent;
-import org.rcbench.history.HistoryStore;
 import org.rcbench.history.Fixtures;
+import org.rcbench.history.HistoryStore;
 import org.rcbench.history.RunRecord;
 import org.rcbench.testing.CliRun;
 

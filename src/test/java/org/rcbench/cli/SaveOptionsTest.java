@@ -19,11 +19,11 @@ import org.rcbench.history.Digests;
 import org.rcbench.history.Fixtures;
 import org.rcbench.history.HistoryStore;
 import org.rcbench.history.RunRecord;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
+import picocli.CommandLine;
 
 /**
  * {@link SaveOptions} used as the check command will use it, through a stand-in command that takes

@@ -10,6 +10,7 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.rcbench.design.Design;
+import org.rcbench.diagnose.Words;
 import org.rcbench.measure.CycleMeter;
 import org.rcbench.measure.MeterConfig;
 import org.rcbench.sim.Deviation;
@@ -59,7 +60,7 @@ class WatchCommandTest {
         CliRun p = CliRun.of("predict", "--json", "captures/piper-mk2.toml");
         double nominal = new ObjectMapper().readTree(p.out()).at("/nominal/frequency_hz").asDouble();
         String f = line(r.out(), "frequency");
-        assertThat(f).contains(PredictCommand.value(org.rcbench.circuit.TimingQuantity.FREQUENCY, nominal))
+        assertThat(f).contains(Words.value(org.rcbench.circuit.TimingQuantity.FREQUENCY, nominal))
                 .endsWith("pass");
         assertThat(r.out()).contains("  verdict: PASS, every quantity inside its 95 % band")
                 .contains("  diagnosis: No part needs to be outside its band");
