@@ -55,9 +55,9 @@ final class WatchView {
             j = judge == null ? null : judge.of(r);
             Measurement m = r.measurement();
             Measurement.Irregularities irr = m.irregularities();
-            lines.add(String.format(Locale.ROOT, "  %s of signal: %d edges, %d cycles measured (%d settling, %d glitches),"
-                    + " %d gaps", SiFormat.format(r.probeSeconds(), "s", 3), r.edges(), m.cycles(), irr.settlingCycles(),
-                    irr.glitches(), r.gaps()));
+            lines.add(String.format(Locale.ROOT, "  %s of signal: %d edges, %d cycle%s measured (%d settling, %d glitches),"
+                    + " %d gaps", SiFormat.format(r.probeSeconds(), "s", 3), r.edges(), m.cycles(), m.cycles() == 1 ? "" : "s",
+                    irr.settlingCycles(), irr.glitches(), r.gaps()));
             if (r.bistable() != null) {
                 latch(lines, r.bistable());
             } else if (r.monostable() != null) {
