@@ -118,14 +118,23 @@ public final class CaptureFiles {
      *                           why (unknown, ambiguous, or a signal that is not a 1-bit wire)
      */
     public static int selectChannel(Capture capture, String spec) {
-        Map<Integer, String> channels = capture.channels();
+        return selectChannel(capture.name(), capture.channels(), capture.skippedSignals(), spec);
+    }
+
+    /**
+     * As {@link #selectChannel(Capture, String)} for any named channels: those of the source called
+     * {@code where} (a live probe's, a simulated board's), with {@code skipped} the signals it holds
+     * that are not 1-bit wires (name to description; empty for a probe).
+     */
+    public static int selectChannel(String where, Map<Integer, String> channels, Map<String, String> skipped,
+            String spec) {
         String s = spec.strip();
         if (!s.isEmpty() && s.length() <= 3 && s.chars().allMatch(c -> c >= '0' && c <= '9')) {
             int ch = Integer.parseInt(s);
             if (ch <= EdgeCaptureFormat.MAX_CHANNEL && (channels.isEmpty() || channels.containsKey(ch))) {
                 return ch;
             }
-            throw new BadInputException(capture.name(), "no channel " + ch + " (channels: "
+            throw new BadInputException(where, "no channel " + ch + " (channels: "
                     + describe(channels) + ")");
         }
         Integer found = null;
@@ -143,16 +152,16 @@ public final class CaptureFiles {
             return found;
         }
         if (suffixMatches > 1) {
-            throw new BadInputException(capture.name(), "channel name " + Snippet.quote(s)
+            throw new BadInputException(where, "channel name " + Snippet.quote(s)
                     + " matches several channels; give the full name (channels: " + describe(channels) + ")");
         }
-        for (Map.Entry<String, String> e : capture.skippedSignals().entrySet()) {
+        for (Map.Entry<String, String> e : skipped.entrySet()) {
             if (e.getKey().equals(s) || e.getKey().endsWith("." + s)) {
-                throw new BadInputException(capture.name(), e.getKey() + " is " + e.getValue()
+                throw new BadInputException(where, e.getKey() + " is " + e.getValue()
                         + "; only 1-bit wires can be measured");
             }
         }
-        throw new BadInputException(capture.name(), "no channel named " + Snippet.quote(s) + " (channels: "
+        throw new BadInputException(where, "no channel named " + Snippet.quote(s) + " (channels: "
                 + describe(channels) + ")");
     }
 

@@ -5,7 +5,6 @@ import java.io.Closeable;
 import java.io.Flushable;
 import java.io.IOException;
 import java.io.OutputStream;
-import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.OpenOption;
@@ -26,7 +25,7 @@ import org.rcbench.edge.EdgeSink;
  * strips spaces around them. Not thread-safe: {@link org.rcbench.record.Recorder} adds the locking
  * and timing for live use.
  */
-public final class EdgeCaptureWriter implements Closeable, Flushable {
+public final class EdgeCaptureWriter implements EdgeWriter, Closeable, Flushable {
     private static final byte[] END_TICK = ("# " + EdgeCaptureFormat.END_TICK + "=").getBytes(StandardCharsets.US_ASCII);
 
     private final AsciiBuffer out;
@@ -132,27 +131,7 @@ public final class EdgeCaptureWriter implements Closeable, Flushable {
             }
         }
         try (EdgeCaptureWriter w = to(out, header, gzip)) {
-            source.streamTo(new EdgeSink() {
-                @Override
-                public void onEdge(long tick, int channel, int level) {
-                    try {
-                        w.append(tick, channel, level);
-                    } catch (IOException e) {
-                        throw new UncheckedIOException(e);
-                    }
-                }
-
-                @Override
-                public void onEnd(long lastTick) {
-                    try {
-                        w.end(lastTick);
-                    } catch (IOException e) {
-                        throw new UncheckedIOException(e);
-                    }
-                }
-            });
-        } catch (UncheckedIOException e) {
-            throw e.getCause();
+            EdgeWriter.copy(source, w, ch -> true);
         }
     }
 

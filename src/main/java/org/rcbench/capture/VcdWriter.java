@@ -4,7 +4,6 @@ import java.io.Closeable;
 import java.io.Flushable;
 import java.io.IOException;
 import java.io.OutputStream;
-import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -26,7 +25,7 @@ import org.rcbench.edge.Timebase;
  * tick exact. A gap is written as {@code x}. Only changes are listed, no {@code $dumpvars}. Not
  * thread-safe.
  */
-public final class VcdWriter implements Closeable, Flushable {
+public final class VcdWriter implements EdgeWriter, Closeable, Flushable {
     /** Scope of channels whose names have no dot. */
     public static final String DEFAULT_SCOPE = "capture";
 
@@ -172,29 +171,7 @@ public final class VcdWriter implements Closeable, Flushable {
             for (int ch : chosen.keySet()) {
                 wanted[ch] = true;
             }
-            source.streamTo(new EdgeSink() {
-                @Override
-                public void onEdge(long tick, int channel, int level) {
-                    if (wanted[channel]) {
-                        try {
-                            w.append(tick, channel, level);
-                        } catch (IOException e) {
-                            throw new UncheckedIOException(e);
-                        }
-                    }
-                }
-
-                @Override
-                public void onEnd(long lastTick) {
-                    try {
-                        w.end(lastTick);
-                    } catch (IOException e) {
-                        throw new UncheckedIOException(e);
-                    }
-                }
-            });
-        } catch (UncheckedIOException e) {
-            throw e.getCause();
+            EdgeWriter.copy(source, w, ch -> wanted[ch]);
         } catch (IllegalArgumentException e) {
             throw new BadInputException(source.name(), e.getMessage(), e);
         }

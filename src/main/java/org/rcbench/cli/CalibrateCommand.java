@@ -12,7 +12,6 @@ import org.rcbench.measure.MeterConfig;
 import org.rcbench.probe.SessionStatus;
 import org.rcbench.probe.StoredCalibration;
 import org.rcbench.source.DurationGate;
-import org.rcbench.source.HistoryCalibrations;
 import org.rcbench.source.LiveSource;
 import org.rcbench.source.StreamStart;
 import org.rcbench.units.SiFormat;
@@ -58,11 +57,11 @@ public final class CalibrateCommand implements Callable<Integer> {
     double referencePpm;
 
     @Option(names = "--duration", paramLabel = "TIME", defaultValue = "60s", converter = ValueConverters.Time.class,
-            description = "How long to measure, probe time (default ${DEFAULT-VALUE}); longer averages down the noise.")
+            description = "How long to measure, probe time (default: ${DEFAULT-VALUE}); longer averages down the noise.")
     double duration;
 
     @Option(names = "--channel", paramLabel = "N", defaultValue = "0",
-            description = "The channel the reference is on (default ${DEFAULT-VALUE}).")
+            description = "The channel the reference is on (default: ${DEFAULT-VALUE}).")
     int channel;
 
     @Option(names = "--probe-id", paramLabel = "HEX",
@@ -89,7 +88,7 @@ public final class CalibrateCommand implements Callable<Integer> {
             throw new BadInputException("--probe-id", "\"" + probeId + "\" is not up to 16 hex digits");
         }
         Terminal term = new Terminal(err, !plain && Terminal.detect());
-        LiveSource src = source.open(err, calibrations());
+        LiveSource src = source.open(err, database.calibrations());
         DurationGate gate = new DurationGate(duration);
         CycleMeter[] meter = new CycleMeter[1];
         try (ShutdownGuard guard = new ShutdownGuard(src::close)) {
@@ -146,7 +145,7 @@ public final class CalibrateCommand implements Callable<Integer> {
         } else {
             String reference = SiFormat.format(referenceHz, "Hz", 6) + " reference ±" + trim(referencePpm) + " ppm, "
                     + m.cycles() + " cycles";
-            calibrations().save(new StoredCalibration(id, offsetPpm, uPpm, reference, Instant.now()));
+            database.calibrations().save(new StoredCalibration(id, offsetPpm, uPpm, reference, Instant.now()));
             out.println("  stored in the history " + database.path() + "; sessions with this probe apply it from now on");
         }
         out.flush();
@@ -155,10 +154,5 @@ public final class CalibrateCommand implements Callable<Integer> {
 
     private static String trim(double v) {
         return java.math.BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
-    }
-
-    /** The probe calibrations in the history ({@code --db}). */
-    private HistoryCalibrations calibrations() {
-        return SourceOptions.calibrations(database);
     }
 }

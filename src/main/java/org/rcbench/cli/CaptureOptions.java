@@ -1,8 +1,9 @@
 package org.rcbench.cli;
 
+import java.io.PrintWriter;
 import java.util.Locale;
 import org.rcbench.capture.Capture;
-import org.rcbench.capture.CaptureFiles;
+import org.rcbench.capture.EdgeCaptureFormat;
 import org.rcbench.common.BadInputException;
 import org.rcbench.edge.EdgeSink;
 import org.rcbench.edge.Timebase;
@@ -17,6 +18,8 @@ import picocli.CommandLine.Option;
 final class CaptureOptions {
     /** Default probe clock limit: a quartz crystal board, +-50 ppm (see the option's help). */
     static final double DEFAULT_CLOCK_LIMIT_PPM = 50;
+    /** The name of the channel a monostable's trigger is taken from when no option names one. */
+    static final String TRIGGER_NAME = "trigger";
 
     @Option(names = "--channel", paramLabel = "N|NAME",
             description = "Channel to measure: number or name (default: the first channel).")
@@ -56,18 +59,52 @@ final class CaptureOptions {
 
     /** The channel to measure: the option's, else the capture's lowest. */
     int channel(Capture capture) {
-        if (channel != null) {
-            return CaptureFiles.selectChannel(capture, channel);
+        return channel(Channels.of(capture), channel);
+    }
+
+    /** The channel to measure among {@code channels}: the option's, else the lowest. */
+    int channel(Channels channels) {
+        return channel(channels, channel);
+    }
+
+    /** The channel {@code spec} names (a number or a name), or with {@code spec} null the lowest (0 when none is named). */
+    static int channel(Channels channels, String spec) {
+        if (spec != null) {
+            return channels.select(spec);
         }
-        return capture.channels().isEmpty() ? 0 : capture.channels().keySet().stream().min(Integer::compare).get();
+        int min = 0;
+        boolean first = true;
+        for (int ch : channels.names().keySet()) {
+            if (first || ch < min) {
+                min = ch;
+                first = false;
+            }
+        }
+        return min;
     }
 
     /** The trigger channel, or -1 when none was asked for; it must differ from {@code output}. */
     int triggerChannel(Capture capture, int output) {
+        return triggerChannel(Channels.of(capture), output, false);
+    }
+
+    /**
+     * The trigger channel, or -1 when none was asked for; it must differ from {@code output}. For a
+     * {@code monostable} without the option: the channel named {@value #TRIGGER_NAME} when there is
+     * one (the simulated board's and its recordings' layout).
+     */
+    int triggerChannel(Channels channels, int output, boolean monostable) {
         if (triggerChannel == null) {
+            if (monostable) {
+                for (var e : channels.names().entrySet()) {
+                    if (e.getValue().equals(TRIGGER_NAME) && e.getKey() != output) {
+                        return e.getKey();
+                    }
+                }
+            }
             return -1;
         }
-        int trig = CaptureFiles.selectChannel(capture, triggerChannel);
+        int trig = channels.select(triggerChannel);
         requireDifferent("--trigger-channel", trig, output);
         return trig;
     }
@@ -84,7 +121,16 @@ final class CaptureOptions {
 
     /** The file's timebase with the options applied; see {@code --clock-tolerance-ppm} for the default. */
     Timebase timebase(Capture capture) {
-        Timebase t = capture.timebase();
+        return timebase(capture.timebase(), capture.header().containsKey(EdgeCaptureFormat.CALIBRATION_U_PPM));
+    }
+
+    /**
+     * {@code t} with {@code --clock-ppm} and {@code --clock-tolerance-ppm} applied; without the
+     * latter and when {@code t}'s uncertainty is not {@code stated}, the default limit
+     * ({@value #DEFAULT_CLOCK_LIMIT_PPM} ppm). A live source states its own (stored calibration or the
+     * clock's typical bound).
+     */
+    Timebase timebase(Timebase t, boolean stated) {
         if (clockPpm != null) {
             if (!Double.isFinite(clockPpm) || Math.abs(clockPpm) >= 1e6) {
                 throw new BadInputException("--clock-ppm", "out of range: " + clockPpm);
@@ -96,10 +142,23 @@ final class CaptureOptions {
                 throw new BadInputException("--clock-tolerance-ppm", "must be zero or more: " + clockTolerancePpm);
             }
             t = t.withTolerancePpm(clockTolerancePpm / Math.sqrt(3));
-        } else if (!capture.header().containsKey("calibration_u_ppm")) {
+        } else if (!stated) {
             t = t.withTolerancePpm(DEFAULT_CLOCK_LIMIT_PPM / Math.sqrt(3));
         }
         return t;
+    }
+
+    /** Whether the clock options were given (they override the source's calibration). */
+    boolean overridesClock() {
+        return clockPpm != null || clockTolerancePpm != null;
+    }
+
+    /** Prints the capture's warnings on {@code err}, one line each. */
+    static void warn(Capture capture, PrintWriter err) {
+        for (String w : capture.warnings()) {
+            err.println("rcbench: warning: " + w);
+        }
+        err.flush();
     }
 
     /** The level a trigger edge goes to. */

@@ -10,6 +10,7 @@ import org.rcbench.diagnose.FaultKind;
 import org.rcbench.diagnose.QuantityCheck;
 import org.rcbench.diagnose.Suspect;
 import org.rcbench.diagnose.Words;
+import org.rcbench.measure.Measurement;
 import org.rcbench.units.SiFormat;
 import org.rcbench.units.Unit;
 import org.rcbench.units.ValueCode;
@@ -25,11 +26,20 @@ final class CheckReport {
     private CheckReport() {
     }
 
-    static String text(CheckResult r, String captureName) {
+    /**
+     * The report of {@code r}; {@code source} names what was measured (a capture, a live source) and
+     * {@code pulses} is the number of monostable pulses timed from the trigger channel, or -1 when the
+     * cycles were counted.
+     */
+    static String text(CheckResult r, String source, long pulses) {
         StringBuilder sb = new StringBuilder();
         sb.append(r.verdict().name()).append("  ").append(r.design().title()).append(": ").append(r.reason()).append('\n');
-        sb.append(String.format(Locale.ROOT, "(capture %s, %d cycle%s; design %s)%n", captureName,
-                r.measurement().cycles(), r.measurement().cycles() == 1 ? "" : "s", r.design().source()));
+        Measurement m = r.measurement();
+        long n = pulses >= 0 ? pulses : m.cycles();
+        String span = Double.isFinite(m.spanSeconds()) && m.spanSeconds() > 0
+                ? " in " + SiFormat.format(m.spanSeconds(), "s", 3) : "";
+        sb.append(String.format(Locale.ROOT, "(%s: %d %s%s%s; design %s)%n", source, n, pulses >= 0 ? "pulse" : "cycle",
+                n == 1 ? "" : "s", span, r.design().source()));
         if (!r.checks().isEmpty()) {
             sb.append('\n');
             sb.append(String.format(Locale.ROOT, "%-12s %-24s %-12s %-24s %-24s %s%n", "", "measured", "nominal",

@@ -7,6 +7,7 @@ import org.rcbench.common.BadInputException;
 import org.rcbench.history.DataFolder;
 import org.rcbench.history.HistoryStore;
 import org.rcbench.history.StoreOptions;
+import org.rcbench.source.HistoryCalibrations;
 import picocli.CommandLine.Option;
 
 /**
@@ -35,16 +36,25 @@ public final class DatabaseOption {
 
     /** Opens (creating when missing) the history, printing any warning on {@code err}. */
     public HistoryStore open(PrintWriter err) {
-        if (!(waitSeconds >= 0) || waitSeconds > 86_400) {
-            throw new BadInputException("--db-wait", "must be 0 to 86400 seconds, not " + waitSeconds);
-        }
-        HistoryStore store = HistoryStore.open(path(),
-                StoreOptions.DEFAULTS.withBusyTimeoutMillis((int) Math.round(waitSeconds * 1000)));
+        HistoryStore store = HistoryStore.open(path(), StoreOptions.DEFAULTS.withBusyTimeoutMillis(waitMillis()));
         for (String w : store.warnings()) {
             err.println("rcbench: warning: " + w);
         }
         err.flush();
         return store;
+    }
+
+    /** The probe calibrations kept in this history (opened when first needed, waiting as {@code --db-wait} says). */
+    public HistoryCalibrations calibrations() {
+        return HistoryCalibrations.at(path(), waitMillis());
+    }
+
+    /** {@code --db-wait} in milliseconds, checked. */
+    private int waitMillis() {
+        if (!(waitSeconds >= 0) || waitSeconds > 86_400) {
+            throw new BadInputException("--db-wait", "must be 0 to 86400 seconds, not " + waitSeconds);
+        }
+        return (int) Math.round(waitSeconds * 1000);
     }
 
     /**

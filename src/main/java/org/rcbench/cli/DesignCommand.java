@@ -15,6 +15,7 @@ import org.rcbench.circuit.Topology;
 import org.rcbench.common.BadInputException;
 import org.rcbench.design.Design;
 import org.rcbench.design.DesignText;
+import org.rcbench.diagnose.Words;
 import org.rcbench.picker.Candidate;
 import org.rcbench.picker.PartPicker;
 import org.rcbench.picker.PickRequest;
@@ -28,8 +29,8 @@ import picocli.CommandLine.Spec;
 
 /** {@code rcbench design}: propose part sets from preferred series for a target timing. */
 @Command(name = "design", mixinStandardHelpOptions = true,
-        description = {"Propose timing parts from preferred-value series for a target frequency and duty,",
-            "pulse width, or PWM duty range; ranked by predicted error and spread, each with its bands."})
+        description = {"Propose timing parts from preferred-value series for a target frequency and duty, pulse"
+            + " width, or PWM duty range; ranked by predicted error and spread, each with its bands."})
 public final class DesignCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
@@ -38,7 +39,7 @@ public final class DesignCommand implements Callable<Integer> {
             description = "monostable, astable, astable-one-diode, astable-two-diode, astable-output-fed or pwm-pot.")
     String topology;
 
-    @Option(names = "--family", defaultValue = "bipolar", paramLabel = "NAME", description = "bipolar or cmos (default ${DEFAULT-VALUE}).")
+    @Option(names = "--family", defaultValue = "bipolar", paramLabel = "NAME", description = "bipolar or cmos (default: ${DEFAULT-VALUE}).")
     String family;
 
     @Option(names = "--supply", required = true, paramLabel = "VOLTS", converter = ValueConverters.Voltage.class,
@@ -50,7 +51,7 @@ public final class DesignCommand implements Callable<Integer> {
     Double frequency;
 
     @Option(names = "--duty", paramLabel = "FRACTION", converter = ValueConverters.Fraction.class,
-            description = "Target duty cycle, 0.6 or 60% (astables).")
+            description = "Target duty cycle, e.g. 0.6 or 60%% (astables).")
     Double duty;
 
     @Option(names = "--pulse", paramLabel = "SECONDS", converter = ValueConverters.Time.class,
@@ -58,39 +59,39 @@ public final class DesignCommand implements Callable<Integer> {
     Double pulse;
 
     @Option(names = "--duty-min", paramLabel = "FRACTION", converter = ValueConverters.Fraction.class,
-            defaultValue = "0.05", description = "PWM duty with the wiper at the discharge end (default ${DEFAULT-VALUE}).")
+            defaultValue = "0.05", description = "PWM duty with the wiper at the discharge end (default: ${DEFAULT-VALUE}).")
     double dutyMin;
 
     @Option(names = "--duty-max", paramLabel = "FRACTION", converter = ValueConverters.Fraction.class,
-            defaultValue = "0.95", description = "PWM duty with the wiper at the charge end (default ${DEFAULT-VALUE}).")
+            defaultValue = "0.95", description = "PWM duty with the wiper at the charge end (default: ${DEFAULT-VALUE}).")
     double dutyMax;
 
     @Option(names = "--series", paramLabel = "E24", converter = ValueConverters.Series.class, defaultValue = "E24",
-            description = "Series for resistors (default ${DEFAULT-VALUE}).")
+            description = "Series for resistors (default: ${DEFAULT-VALUE}).")
     PreferredSeries series;
 
     @Option(names = "--cap-series", paramLabel = "E6", converter = ValueConverters.Series.class, defaultValue = "E6",
-            description = "Series for the timing capacitor (default ${DEFAULT-VALUE}).")
+            description = "Series for the timing capacitor (default: ${DEFAULT-VALUE}).")
     PreferredSeries capSeries;
 
     @Option(names = "--tolerance", paramLabel = "PERCENT", converter = ValueConverters.ToleranceBand.class,
-            description = "Resistor tolerance (default: the series' usual one, E24 5%).")
+            description = "Resistor tolerance (default: the series' usual one, e.g. 5%% for E24).")
     Tolerance tolerance;
 
     @Option(names = "--cap-tolerance", paramLabel = "PERCENT", converter = ValueConverters.ToleranceBand.class,
-            defaultValue = "10%", description = "Capacitor tolerance (default ${DEFAULT-VALUE}).")
+            defaultValue = "10%", description = "Capacitor tolerance (default: ${DEFAULT-VALUE}).")
     Tolerance capTolerance;
 
     @Option(names = "--pot-tolerance", paramLabel = "PERCENT", converter = ValueConverters.ToleranceBand.class,
-            defaultValue = "20%", description = "Potentiometer tolerance (default ${DEFAULT-VALUE}).")
+            defaultValue = "20%", description = "Potentiometer tolerance (default: ${DEFAULT-VALUE}).")
     Tolerance potTolerance;
 
     @Option(names = "--diode", paramLabel = "KIND", defaultValue = "silicon",
-            description = "silicon or schottky (default ${DEFAULT-VALUE}).")
+            description = "silicon or schottky (default: ${DEFAULT-VALUE}).")
     String diode;
 
     @Option(names = "--min-resistance", paramLabel = "OHMS", converter = ValueConverters.Resistance.class,
-            defaultValue = "1k", description = "Smallest timing resistor (default ${DEFAULT-VALUE}; common practice).")
+            defaultValue = "1k", description = "Smallest timing resistor (default: ${DEFAULT-VALUE}; common practice).")
     double minOhms;
 
     @Option(names = "--max-resistance", paramLabel = "OHMS", converter = ValueConverters.Resistance.class,
@@ -98,14 +99,14 @@ public final class DesignCommand implements Callable<Integer> {
     Double maxOhms;
 
     @Option(names = "--min-cap", paramLabel = "FARADS", converter = ValueConverters.Capacitance.class,
-            defaultValue = "100p", description = "Smallest timing capacitor (default ${DEFAULT-VALUE}).")
+            defaultValue = "100p", description = "Smallest timing capacitor (default: ${DEFAULT-VALUE}).")
     double minFarads;
 
     @Option(names = "--max-cap", paramLabel = "FARADS", converter = ValueConverters.Capacitance.class,
-            defaultValue = "100u", description = "Largest timing capacitor (default ${DEFAULT-VALUE}).")
+            defaultValue = "100u", description = "Largest timing capacitor (default: ${DEFAULT-VALUE}).")
     double maxFarads;
 
-    @Option(names = "--count", paramLabel = "N", defaultValue = "5", description = "Candidates to list (default ${DEFAULT-VALUE}).")
+    @Option(names = "--count", paramLabel = "N", defaultValue = "5", description = "Candidates to list (default: ${DEFAULT-VALUE}).")
     int count;
 
     @Option(names = "--save", paramLabel = "FILE", description = "Write the best candidate as a design file.")
@@ -172,13 +173,13 @@ public final class DesignCommand implements Callable<Integer> {
                 errs.append(errs.length() == 0 ? "" : ", ").append(e.getKey()).append(' ')
                         .append(String.format(Locale.ROOT, "%+.2f %%", e.getValue() * 100));
             }
-            sb.append(String.format(Locale.ROOT, "   %s %s", label(main), PredictCommand.value(main, p.nominal(main))));
+            sb.append(String.format(Locale.ROOT, "   %s %s", label(main), Words.value(main, p.nominal(main))));
             if (p.quantities().contains(TimingQuantity.DUTY) && r.topology() != Topology.MONOSTABLE) {
-                sb.append(", duty ").append(PredictCommand.value(TimingQuantity.DUTY, p.nominal(TimingQuantity.DUTY)));
+                sb.append(", duty ").append(Words.value(TimingQuantity.DUTY, p.nominal(TimingQuantity.DUTY)));
             }
             sb.append(String.format(Locale.ROOT, "; error %s; spread %.2f %% (1 σ)%n", errs, c.spread() * 100));
             sb.append(String.format(Locale.ROOT, "   worst case %s; 95 %% %s%n",
-                    PredictCommand.band(main, p.worstCase(main)), PredictCommand.band(main, p.statistical(main))));
+                    Words.band(main, p.worstCase(main)), Words.band(main, p.statistical(main))));
             for (String w : p.warnings()) {
                 sb.append("   note: ").append(w).append('\n');
             }
@@ -196,14 +197,14 @@ public final class DesignCommand implements Callable<Integer> {
     private static String goal(PickRequest r) {
         switch (r.topology()) {
             case MONOSTABLE:
-                return "pulse " + PredictCommand.value(TimingQuantity.PULSE_WIDTH, r.pulseSeconds());
+                return "pulse " + Words.value(TimingQuantity.PULSE_WIDTH, r.pulseSeconds());
             case PWM_POT:
                 return String.format(Locale.ROOT, "%s, duty %.0f %% to %.0f %%",
-                        PredictCommand.value(TimingQuantity.FREQUENCY, r.frequencyHz()), r.dutyMin() * 100, r.dutyMax() * 100);
+                        Words.value(TimingQuantity.FREQUENCY, r.frequencyHz()), r.dutyMin() * 100, r.dutyMax() * 100);
             case OUTPUT_FED:
-                return PredictCommand.value(TimingQuantity.FREQUENCY, r.frequencyHz());
+                return Words.value(TimingQuantity.FREQUENCY, r.frequencyHz());
             default:
-                return PredictCommand.value(TimingQuantity.FREQUENCY, r.frequencyHz())
+                return Words.value(TimingQuantity.FREQUENCY, r.frequencyHz())
                         + (Double.isNaN(r.duty()) ? "" : String.format(Locale.ROOT, " at %.1f %% duty", r.duty() * 100));
         }
     }

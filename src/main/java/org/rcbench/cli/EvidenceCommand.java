@@ -27,18 +27,18 @@ public final class EvidenceCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Option(names = "--boards", paramLabel = "N", defaultValue = "200", description = "Boards per population (default ${DEFAULT-VALUE}).")
+    @Option(names = "--boards", paramLabel = "N", defaultValue = "200", description = "Boards per population (default: ${DEFAULT-VALUE}).")
     int boards;
 
-    @Option(names = "--seed", paramLabel = "S", defaultValue = "1", description = "Seed (default ${DEFAULT-VALUE}).")
+    @Option(names = "--seed", paramLabel = "S", defaultValue = "1", description = "Seed (default: ${DEFAULT-VALUE}).")
     long seed;
 
     @Option(names = "--min-multiple", paramLabel = "M", defaultValue = "3",
-            description = "Smallest fault in multiples of the part's tolerance (default ${DEFAULT-VALUE}).")
+            description = "Smallest fault in multiples of the part's tolerance (default: ${DEFAULT-VALUE}).")
     double minMultiple;
 
     @Option(names = "--max-multiple", paramLabel = "M", defaultValue = "6",
-            description = "Largest fault in multiples of the part's tolerance (default ${DEFAULT-VALUE}).")
+            description = "Largest fault in multiples of the part's tolerance (default: ${DEFAULT-VALUE}).")
     double maxMultiple;
 
     @Option(names = "--only", paramLabel = "TEXT", description = "Only the populations whose name contains TEXT.")

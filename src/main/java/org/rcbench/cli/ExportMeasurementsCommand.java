@@ -19,14 +19,13 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code rcbench export measurements RUN|--last|--from-json FILE}: measured quantities as CSV. */
 @Command(name = "measurements", mixinStandardHelpOptions = true,
         description = {"Write the measurements of a stored run as CSV.",
-            "Columns: quantity, value, uncertainty (expanded), unit, coverage_factor. --from-json reads",
-            "the output of rcbench measure --json or check --json instead of the history."})
+            "Columns: quantity, value, uncertainty (expanded), unit, coverage_factor.",
+            "--from-json reads the output of rcbench measure --json or check --json instead of the history."})
 public final class ExportMeasurementsCommand implements Callable<Integer> {
     /** The header record. */
     public static final String[] HEADER = {"quantity", "value", "uncertainty", "unit", "coverage_factor"};
@@ -34,11 +33,8 @@ public final class ExportMeasurementsCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Parameters(index = "0", arity = "0..1", paramLabel = "RUN", description = "Run number (see rcbench history).")
-    Long run;
-
-    @Option(names = "--last", description = "The run saved last.")
-    boolean last;
+    @Mixin
+    RunChoice runs;
 
     @Option(names = "--from-json", paramLabel = "FILE",
             description = "Read the output of rcbench measure --json or check --json (- for stdin) instead of the history.")
@@ -54,13 +50,13 @@ public final class ExportMeasurementsCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         List<Measured> rows;
         if (fromJson != null) {
-            if (run != null || last) {
+            if (runs.given()) {
                 throw new BadInputException("--from-json", "give either a run or --from-json, not both");
             }
             rows = CheckDocument.measurementsOf(read(fromJson));
         } else {
             try (HistoryStore store = database.openExisting(spec.commandLine().getErr())) {
-                rows = Runs.pick(store, run, last).content().measurements();
+                rows = runs.pick(store).content().measurements();
             }
         }
         PrintWriter out = spec.commandLine().getOut();

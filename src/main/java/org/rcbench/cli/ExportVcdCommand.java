@@ -65,7 +65,7 @@ public final class ExportVcdCommand implements Callable<Integer> {
                 }
             }
             OutputFile.stream(output, os -> VcdWriter.write(c, os, unit, chosen));
-            CaptureChannel.warn(c, err);
+            CaptureOptions.warn(c, err);
             err.println("rcbench: " + chosen.size() + (chosen.size() == 1 ? " channel" : " channels") + " written to "
                     + output + " in units of " + unit.text());
         }

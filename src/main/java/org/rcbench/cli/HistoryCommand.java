@@ -1,5 +1,7 @@
 package org.rcbench.cli;
 
+import static org.rcbench.json.JsonNumbers.number;
+
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
@@ -43,8 +45,8 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "history", mixinStandardHelpOptions = true,
         description = {"List stored checks and the trend of each estimated part.",
-            "For each unit and part: the least-squares drift per year with its standard error, and when",
-            "the fitted line leaves the part's tolerance band (with a 95 % range), or why that is not said."})
+            "For each unit and part: the least-squares drift per year with its standard error, and when the fitted"
+                + " line leaves the part's tolerance band (with a 95 %% range), or why that is not said."})
 public final class HistoryCommand implements Callable<Integer> {
     private static final DateTimeFormatter MINUTE =
             DateTimeFormatter.ofPattern("uuuu-MM-dd HH:mm", Locale.ROOT).withZone(ZoneOffset.UTC);
@@ -155,7 +157,7 @@ public final class HistoryCommand implements Callable<Integer> {
             x.put("board", r.board());
             x.put("serial", r.serial());
             x.put("verdict", r.verdict());
-            num(x, "frequency_hz", r.frequencyHz());
+            number(x, "frequency_hz", r.frequencyHz());
             x.put("top_suspect", r.topSuspect());
             x.put("note", r.note());
         }
@@ -167,44 +169,36 @@ public final class HistoryCommand implements Callable<Integer> {
             x.put("serial", t.serial());
             x.put("part", t.part());
             x.put("unit", t.unit());
-            num(x, "nominal", t.nominal());
-            num(x, "tolerance_minus", t.tolerance() == null ? Double.NaN : t.tolerance().minusFraction());
-            num(x, "tolerance_plus", t.tolerance() == null ? Double.NaN : t.tolerance().plusFraction());
+            number(x, "nominal", t.nominal());
+            number(x, "tolerance_minus", t.tolerance() == null ? Double.NaN : t.tolerance().minusFraction());
+            number(x, "tolerance_plus", t.tolerance() == null ? Double.NaN : t.tolerance().plusFraction());
             x.put("runs", a.runs());
-            num(x, "span_years", a.spanYears());
-            num(x, "slope_per_year", a.slopePerYear());
-            num(x, "slope_se_per_year", a.slopeStdErrPerYear());
-            num(x, "slope_p_value", a.slopePValue());
-            num(x, "relative_slope_per_year", a.relativeSlopePerYear());
+            number(x, "span_years", a.spanYears());
+            number(x, "slope_per_year", a.slopePerYear());
+            number(x, "slope_se_per_year", a.slopeStdErrPerYear());
+            number(x, "slope_p_value", a.slopePValue());
+            number(x, "relative_slope_per_year", a.relativeSlopePerYear());
             ArrayNode pts = x.putArray("points");
             for (PartTrend.Point p : t.points()) {
                 ObjectNode q = pts.addObject();
                 q.put("run", p.runId());
                 q.put("recorded_utc", p.recordedAt().toString());
-                num(q, "value", p.value());
-                num(q, "low", p.low());
-                num(q, "high", p.high());
+                number(q, "value", p.value());
+                number(q, "low", p.low());
+                number(q, "high", p.high());
             }
             Projection p = a.projection();
             ObjectNode j = x.putObject("projection");
             j.put("kind", p.kind().name().toLowerCase(Locale.ROOT));
-            num(j, "edge", p.edge());
+            number(j, "edge", p.edge());
             j.put("crossing_utc", p.crossing() == null ? null : p.crossing().toString());
             j.put("earliest_utc", p.earliest() == null ? null : p.earliest().toString());
             j.put("latest_utc", p.latest() == null ? null : p.latest().toString());
-            num(j, "years_from_last_run", p.yearsFromLastRun());
+            number(j, "years_from_last_run", p.yearsFromLastRun());
             j.put("horizon_years", p.horizonYears());
             j.put("text", TrendText.describe(a));
         }
         return o;
-    }
-
-    private static void num(ObjectNode o, String key, double v) {
-        if (Double.isFinite(v)) {
-            o.put(key, v);
-        } else {
-            o.putNull(key);
-        }
     }
 
     private static String dash(String s) {

@@ -47,7 +47,7 @@ public final class MeasureCommand implements Callable<Integer> {
     @Option(names = "--reset-channel", paramLabel = "N|NAME", description = "Bistable: the reset button input.")
     String resetChannel;
 
-    @Option(names = "--bounce-window", paramLabel = "TIME", defaultValue = "20ms", converter = SecondsConverter.class,
+    @Option(names = "--bounce-window", paramLabel = "TIME", defaultValue = "20ms", converter = ValueConverters.TimeOrZero.class,
             description = "Bistable: edges this soon after a press or release are bounce (default: ${DEFAULT-VALUE}).")
     double bounceWindowSeconds;
 
@@ -88,9 +88,7 @@ public final class MeasureCommand implements Callable<Integer> {
             }
             capture.streamTo(new FanOut(sinks.toArray(new EdgeSink[0])));
             Measurement m = meter.result();
-            for (String w : capture.warnings()) {
-                err.println("rcbench: warning: " + w);
-            }
+            CaptureOptions.warn(capture, err);
             if (json) {
                 ObjectNode o = MeasurementJson.of(m);
                 o.put("capture", capture.name());

@@ -9,9 +9,9 @@ import org.rcbench.serial.PortAccess;
 import org.rcbench.serial.PortInfo;
 import org.rcbench.serial.SerialPorts;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
-import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code rcbench ports [DEVICE...]}: lists serial ports, or checks the given devices, and says how to get access. */
 @Command(name = "ports", mixinStandardHelpOptions = true,
@@ -21,7 +21,7 @@ public final class PortsCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Parameters(arity = "0..*", paramLabel = "DEVICE", description = "device paths to check, e.g. /dev/ttyUSB0")
+    @Parameters(arity = "0..*", paramLabel = "DEVICE", description = "Device paths to check, e.g. /dev/ttyUSB0.")
     List<String> devices = List.of();
 
     @Override

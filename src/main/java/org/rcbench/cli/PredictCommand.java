@@ -7,6 +7,7 @@ import java.util.concurrent.Callable;
 import org.rcbench.circuit.TimingQuantity;
 import org.rcbench.design.Design;
 import org.rcbench.design.DesignReader;
+import org.rcbench.diagnose.Words;
 import org.rcbench.json.PredictionJson;
 import org.rcbench.tolerance.Band;
 import org.rcbench.tolerance.Prediction;
@@ -21,8 +22,8 @@ import picocli.CommandLine.Spec;
 
 /** {@code rcbench predict DESIGN}: what the design should do, with worst-case and statistical bands. */
 @Command(name = "predict", mixinStandardHelpOptions = true,
-        description = {"Predict a design's timing: nominal, worst case over the tolerances, and the 95 % band",
-            "from a Monte Carlo run (JCGM 101), with warnings where the design leaves practical limits."})
+        description = {"Predict a design's timing: nominal, worst case over the tolerances, and the 95 %% band from a"
+            + " Monte Carlo run (JCGM 101), with warnings where the design leaves practical limits."})
 public final class PredictCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
@@ -34,10 +35,10 @@ public final class PredictCommand implements Callable<Integer> {
     boolean json;
 
     @Option(names = "--draws", paramLabel = "N", defaultValue = "100000",
-            description = "Monte Carlo draws (default ${DEFAULT-VALUE}).")
+            description = "Monte Carlo draws (default: ${DEFAULT-VALUE}).")
     int draws;
 
-    @Option(names = "--seed", paramLabel = "S", defaultValue = "1", description = "Monte Carlo seed (default ${DEFAULT-VALUE}).")
+    @Option(names = "--seed", paramLabel = "S", defaultValue = "1", description = "Monte Carlo seed (default: ${DEFAULT-VALUE}).")
     long seed;
 
     @Override
@@ -82,8 +83,8 @@ public final class PredictCommand implements Callable<Integer> {
                 }
                 double nom = p.nominal(q);
                 Double u = p.standardUncertainty().get(q);
-                sb.append(String.format(Locale.ROOT, "%-12s %-12s %-27s %-27s %s%n", label(q), value(q, nom),
-                        band(q, p.worstCase(q)), band(q, p.statistical(q)),
+                sb.append(String.format(Locale.ROOT, "%-12s %-12s %-27s %-27s %s%n", label(q), Words.value(q, nom),
+                        Words.band(q, p.worstCase(q)), Words.band(q, p.statistical(q)),
                         u == null || Double.isNaN(u) ? "—" : relative(u, nom, q)));
             }
             sb.append(String.format(Locale.ROOT, "%nMonte Carlo: %d draws, seed %d, %d stopped%n", p.monteCarlo().draws(),
@@ -109,20 +110,6 @@ public final class PredictCommand implements Callable<Integer> {
             case PULSE_WIDTH: return "pulse width";
             default: return q.jsonKey();
         }
-    }
-
-    static String value(TimingQuantity q, double v) {
-        if (Double.isNaN(v)) {
-            return "—";
-        }
-        return q == TimingQuantity.DUTY ? String.format(Locale.ROOT, "%.2f %%", v * 100) : org.rcbench.units.SiFormat.format(v, q.unit().symbol(), 4);
-    }
-
-    static String band(TimingQuantity q, Band b) {
-        if (!b.isDefined()) {
-            return "—";
-        }
-        return value(q, b.low()) + " .. " + value(q, b.high());
     }
 
     private static String relative(double u, double nominal, TimingQuantity q) {

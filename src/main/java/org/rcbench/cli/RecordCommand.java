@@ -17,7 +17,6 @@ import org.rcbench.protocol.ProbeEvents;
 import org.rcbench.record.Recorder;
 import org.rcbench.record.RecorderOptions;
 import org.rcbench.source.DurationGate;
-import org.rcbench.source.HistoryCalibrations;
 import org.rcbench.source.LiveSource;
 import org.rcbench.source.SourceSpec;
 import org.rcbench.source.StreamStart;
@@ -71,7 +70,7 @@ public final class RecordCommand implements Callable<Integer> {
             throw new BadInputException(output.toString(), "already exists; choose another name or add --overwrite");
         }
         Terminal status = new Terminal(err, !plain && Terminal.detect());
-        LiveSource src = source.open(err, calibrations());
+        LiveSource src = source.open(err, database.calibrations());
         Tally tally = new Tally();
         DurationGate gate = new DurationGate(duration == null ? Double.POSITIVE_INFINITY : duration);
         Recorder[] recorder = new Recorder[1];
@@ -186,10 +185,5 @@ public final class RecordCommand implements Callable<Integer> {
         double seconds() {
             return first < 0 ? 0 : (last - first) / ticksPerSecond;
         }
-    }
-
-    /** The probe calibrations in the history ({@code --db}). */
-    private HistoryCalibrations calibrations() {
-        return SourceOptions.calibrations(database);
     }
 }

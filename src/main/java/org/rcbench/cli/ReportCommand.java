@@ -19,7 +19,6 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code rcbench report RUN|--last [-o FILE]}: a printable HTML test record of one stored run. */
@@ -30,11 +29,8 @@ public final class ReportCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Parameters(index = "0", arity = "0..1", paramLabel = "RUN", description = "Run number (see rcbench history).")
-    Long run;
-
-    @Option(names = "--last", description = "The run saved last.")
-    boolean last;
+    @Mixin
+    RunChoice runs;
 
     @Option(names = {"-o", "--output"}, paramLabel = "FILE", description = "Write to FILE instead of stdout.")
     Path output;
@@ -54,7 +50,7 @@ public final class ReportCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         ReportInput input;
         try (HistoryStore store = database.openExisting(err)) {
-            RunRecord r = Runs.pick(store, run, last);
+            RunRecord r = runs.pick(store);
             List<TrendAnalysis> trends = new ArrayList<>();
             String key = r.context().serial() != null ? r.context().serial() : r.context().board();
             for (PartTrend t : store.partTrends(key)) {

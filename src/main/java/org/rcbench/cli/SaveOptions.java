@@ -3,14 +3,10 @@ package org.rcbench.cli;
 import com.fasterxml.jackson.databind.JsonNode;
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.util.Map;
 import org.rcbench.capture.Capture;
-import org.rcbench.capture.CaptureFiles;
 import org.rcbench.capture.EdgeCaptureFormat;
 import org.rcbench.common.BadInputException;
 import org.rcbench.edge.Timebase;
@@ -20,7 +16,8 @@ import org.rcbench.history.HistoryStore;
 import org.rcbench.history.ProbeInfo;
 import org.rcbench.history.RunContext;
 import org.rcbench.history.RunRecord;
-import org.rcbench.report.CapturePlots;
+import org.rcbench.protocol.Hello;
+import org.rcbench.source.StreamStart;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
@@ -28,7 +25,8 @@ import picocli.CommandLine.Option;
  * The options {@code rcbench check} takes to store its result ({@code --save}, {@code --serial},
  * {@code --note}, {@code --board}, {@code --db}, {@code --db-wait}) and the saving itself. Mix it in
  * with {@code @Mixin SaveOptions save;}, call {@link #validate()} before the work and
- * {@link #save} with the check's JSON document after it.
+ * {@link #save} with the check's JSON document after it. The run stores the document's own plot
+ * data ({@code histogram}, {@code trend}: what the check computed), nothing recomputed.
  */
 public final class SaveOptions {
     @Option(names = "--save", description = "Store this check in the history (see rcbench history, rcbench report).")
@@ -46,13 +44,25 @@ public final class SaveOptions {
     @Mixin
     DatabaseOption database;
 
-    /** What the check command knows about the run besides its JSON document. */
-    public record Request(String boardName, Path designFile, Path captureFile, int channel, ProbeInfo probe) {
+    /**
+     * What the check command knows about the run besides its JSON document.
+     *
+     * @param boardName   the design's board name, or null (then the design file's name)
+     * @param design      the design checked against, name and text
+     * @param captureFile the capture file, or null for a live source
+     * @param probe       the probe and the clock calibration applied
+     */
+    public record Request(String boardName, DesignRef design, Path captureFile, ProbeInfo probe) {
     }
 
     /** Whether {@code --save} was given. */
     public boolean requested() {
         return save;
+    }
+
+    /** The history {@code --db} names (also where live sources find probe calibrations). */
+    public DatabaseOption database() {
+        return database;
     }
 
     /**
@@ -70,28 +80,20 @@ public final class SaveOptions {
     }
 
     /**
-     * Stores the check: context from {@code request} and these options, plot data from the document
-     * or, when it has none, from the capture's raw cycles. Prints {@code rcbench: saved as run N in
-     * PATH} on {@code err}.
+     * Stores the check: context from {@code request} and these options. Prints {@code rcbench: saved
+     * as run N in PATH} on {@code err}.
      *
      * @return the new run's id
      */
     public long save(JsonNode checkDocument, Request request, PrintWriter err) throws IOException {
         String name = board != null ? board : request.boardName();
         if (name == null || name.isBlank()) {
-            String file = request.designFile().getFileName().toString();
+            String file = Path.of(request.design().name()).getFileName().toString();
             name = file.contains(".") ? file.substring(0, file.lastIndexOf('.')) : file;
         }
-        DesignRef design = DesignRef.of(request.designFile().getFileName().toString(), readText(request.designFile()));
-        RunContext context = new RunContext(name, serial, design, request.probe(),
+        RunContext context = new RunContext(name, serial, request.design(), request.probe(),
                 request.captureFile() == null ? null : CaptureRef.of(request.captureFile()), note, Instant.now());
         RunRecord run = RunRecord.of(checkDocument, context);
-        if (request.captureFile() != null && run.content().histogram() == null && run.content().trend().isEmpty()) {
-            try (Capture c = CaptureFiles.open(request.captureFile())) {
-                CapturePlots plots = CapturePlots.of(c, request.channel());
-                run = run.withPlots(plots.histogram(), plots.trend());
-            }
-        }
         try (HistoryStore store = database.open(err)) {
             long id = store.saveRun(run);
             err.println("rcbench: saved as run " + id + " in " + store.name());
@@ -101,20 +103,24 @@ public final class SaveOptions {
     }
 
     /**
-     * The probe of {@code capture} (its header's {@code probe} and {@code firmware}) with the clock
-     * calibration actually applied ({@code applied}) and where that came from.
+     * The probe of {@code capture} (its header's {@code probe_id}, else {@code probe}, and
+     * {@code firmware}) with the clock calibration actually applied ({@code applied}) and where that
+     * came from.
      */
     public static ProbeInfo probeOf(Capture capture, Timebase applied, String calibrationSource) {
         Map<String, String> h = capture.header();
-        return new ProbeInfo(h.get(EdgeCaptureFormat.PROBE), h.get("firmware"), applied.offsetPpm(),
-                applied.tolerancePpm(), calibrationSource);
+        return new ProbeInfo(h.getOrDefault("probe_id", h.get(EdgeCaptureFormat.PROBE)), h.get("firmware"),
+                applied.offsetPpm(), applied.tolerancePpm(), calibrationSource);
     }
 
-    private static String readText(Path file) throws IOException {
-        try {
-            return Files.readString(file, StandardCharsets.UTF_8);
-        } catch (NoSuchFileException e) {
-            throw new BadInputException(file.toString(), "no such file", e);
-        }
+    /**
+     * The probe of a live stream (its hello's id and firmware version) with the clock calibration
+     * applied ({@code applied}) and where that came from.
+     */
+    public static ProbeInfo probeOf(StreamStart start, Timebase applied, String calibrationSource) {
+        Hello hello = start.hello();
+        return new ProbeInfo(hello == null ? start.source() : hello.probeIdHex(),
+                hello == null ? null : hello.firmwareVersion(), applied.offsetPpm(), applied.tolerancePpm(),
+                calibrationSource);
     }
 }

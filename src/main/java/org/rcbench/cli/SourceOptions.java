@@ -16,7 +16,6 @@ import org.rcbench.sim.ProbeOptions;
 import org.rcbench.sim.SimulationSpec;
 import org.rcbench.sim.Stimulus;
 import org.rcbench.source.DemoDesigns;
-import org.rcbench.source.HistoryCalibrations;
 import org.rcbench.source.LiveSource;
 import org.rcbench.source.SourceSpec;
 import org.rcbench.units.Unit;
@@ -54,7 +53,7 @@ public final class SourceOptions {
                 + " control=4k7, supply=7.2V (repeatable).")
     List<String> faults = new ArrayList<>();
 
-    @Option(names = "--jitter", paramLabel = "TIME", converter = SecondsConverter.class,
+    @Option(names = "--jitter", paramLabel = "TIME", converter = ValueConverters.TimeOrZero.class,
             description = "Simulated board: white period noise, RMS (e.g. 2us).")
     double jitterSeconds;
 
@@ -68,19 +67,23 @@ public final class SourceOptions {
     String warmUp;
 
     @Option(names = "--seed", paramLabel = "N", defaultValue = "1",
-            description = "Simulated board: seed of every random draw (default ${DEFAULT-VALUE}).")
+            description = "Simulated board: seed of every random draw (default: ${DEFAULT-VALUE}).")
     long seed;
 
-    @Option(names = "--sim-speed", paramLabel = "realtime|fast", defaultValue = "realtime",
-            description = "Simulated board or replay: real time, or as fast as it can be read (default ${DEFAULT-VALUE}).")
+    @Option(names = "--sim-speed", paramLabel = "realtime|fast",
+            description = "Simulated board or replay: real time, or as fast as it can be read (default: realtime; for"
+                + " check and tune, which want the answer rather than the wait: fast).")
     String speed;
 
+    /** The pace when {@code --sim-speed} is not given. */
+    private Pace unsetPace = Pace.REALTIME;
+
     @Option(names = "--sim-clock-ppm", paramLabel = "PPM", defaultValue = "0",
-            description = "Simulated probe: how fast its clock really runs, ppm (default ${DEFAULT-VALUE}).")
+            description = "Simulated probe: how fast its clock really runs, ppm (default: ${DEFAULT-VALUE}).")
     double clockPpm;
 
     @Option(names = "--sim-clock-hz", paramLabel = "HZ", defaultValue = "16000000",
-            description = "Simulated probe: its tick frequency (default ${DEFAULT-VALUE}).")
+            description = "Simulated probe: its tick frequency, Hz (default: ${DEFAULT-VALUE}).")
     long clockHz;
 
     @Option(names = "--sim-trigger-every", paramLabel = "TIME", converter = ValueConverters.Time.class,
@@ -155,14 +158,6 @@ public final class SourceOptions {
         return LiveSource.of(spec, sessionConfig(), store);
     }
 
-    /** The probe calibrations kept in the history that {@code --db} names (checking {@code --db-wait}). */
-    static HistoryCalibrations calibrations(DatabaseOption db) {
-        if (!(db.waitSeconds >= 0) || db.waitSeconds > 86_400) {
-            throw new BadInputException("--db-wait", "must be 0 to 86400 seconds, not " + db.waitSeconds);
-        }
-        return HistoryCalibrations.at(db.path(), (int) Math.round(db.waitSeconds * 1000));
-    }
-
     /** The session configuration: the defaults, with a faster reconnect poll for simulated probes. */
     public SessionConfig sessionConfig() {
         SessionConfig c = SessionConfig.defaults();
@@ -175,7 +170,47 @@ public final class SourceOptions {
     }
 
     Pace pace() {
-        return Pace.parse(speed);
+        return speed == null ? unsetPace : Pace.parse(speed);
+    }
+
+    /** Makes a simulated board or a replay run as fast as it can be read unless {@code --sim-speed} says otherwise. */
+    void preferFast() {
+        unsetPace = Pace.FAST;
+    }
+
+    /**
+     * The source options given on the command line, by name (options left at their defaults are
+     * not told apart from options not given, which makes no difference to the source).
+     */
+    List<String> given() {
+        List<String> g = new ArrayList<>();
+        String[][] named = {{"--port", port}, {"--sim", sim}, {"--ripple", ripple}, {"--warm-up", warmUp},
+            {"--sim-speed", speed}};
+        for (String[] n : named) {
+            if (n[1] != null) {
+                g.add(n[0]);
+            }
+        }
+        if (replay != null) {
+            g.add("--replay");
+        }
+        if (!probeType.equals(ProbeProfile.RESET_ON_OPEN.name())) {
+            g.add("--probe-type");
+        }
+        if (!faults.isEmpty()) {
+            g.add("--fault");
+        }
+        if (jitterSeconds != 0) {
+            g.add("--jitter");
+        }
+        if (seed != 1) {
+            g.add("--seed");
+        }
+        if (clockPpm != 0 || clockHz != 16_000_000L || triggerEvery != null || byteErrors != 0 || lostBytes != 0
+                || overruns != 0 || !unplugs.isEmpty()) {
+            g.add("--sim-...");
+        }
+        return g;
     }
 
     private SimulationSpec simulation() {

@@ -1,13 +1,11 @@
 package org.rcbench.cli;
 
 import java.io.PrintWriter;
-import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.rcbench.circuit.TimingQuantity;
 import org.rcbench.circuit.Topology;
 import org.rcbench.common.BadInputException;
 import org.rcbench.design.Design;
-import org.rcbench.design.DesignReader;
 import org.rcbench.diagnose.Observations;
 import org.rcbench.diagnose.TuneResult;
 import org.rcbench.diagnose.TuneTarget;
@@ -20,28 +18,26 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /**
- * {@code rcbench tune CAPTURE --design D --frequency 1k | --duty 0.3 | --pulse-width 10ms}: where a
- * potentiometer's wiper is now and which way and how far to turn it.
+ * {@code rcbench tune CAPTURE --design D --frequency 1k | --duty 0.3 | --pulse-width 10ms} (or live:
+ * {@code --sim DESIGN}, {@code --port PORT}): where a potentiometer's wiper is now and which way and
+ * how far to turn it.
  */
 @Command(name = "tune", mixinStandardHelpOptions = true,
-        description = {"Potentiometer tuning: estimate the wiper's position from the capture and say which way and"
-            + " how far to turn it to reach a target frequency, duty or pulse width."})
+        description = {"Potentiometer tuning: estimate the wiper's position from a capture (or live from a probe or a"
+            + " simulated board) and say which way and how far to turn it to reach a target frequency, duty or pulse"
+            + " width."})
 public final class TuneCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
     @Mixin
-    CaptureOptions capture;
+    BoardInput board;
 
-    @Parameters(index = "0", paramLabel = "CAPTURE", description = "Capture file of the board's output.")
-    Path file;
-
-    @Option(names = "--design", required = true, paramLabel = "DESIGN", description = "The board's design file (TOML).")
-    Path design;
+    @Mixin
+    DatabaseOption database;
 
     @ArgGroup(exclusive = true, multiplicity = "1")
     Goal goal;
@@ -53,7 +49,7 @@ public final class TuneCommand implements Callable<Integer> {
         Double frequency;
 
         @Option(names = "--duty", paramLabel = "FRACTION", converter = ValueConverters.Fraction.class,
-                description = "Target duty cycle, e.g. 0.3 or 30%.")
+                description = "Target duty cycle, e.g. 0.3 or 30%%.")
         Double duty;
 
         @Option(names = "--pulse-width", paramLabel = "TIME", converter = ValueConverters.Time.class,
@@ -65,10 +61,12 @@ public final class TuneCommand implements Callable<Integer> {
     String pot;
 
     @Option(names = "--travel-degrees", paramLabel = "DEG",
-            description = "The pot's mechanical travel in degrees (e.g. 270), to state the turn in degrees.")
+            description = "The pot's mechanical travel in degrees (e.g. 270), to state the turn in degrees (default: the"
+                + " design file's travel of the pot, if given).")
     Double travelDegrees;
 
-    @Option(names = "--turns", paramLabel = "N", description = "The pot's number of turns (a multi-turn trimmer).")
+    @Option(names = "--turns", paramLabel = "N",
+            description = "The pot's number of turns (a multi-turn trimmer; default: the design file's travel, if given).")
     Double turns;
 
     @Option(names = "--json", description = "Print the result as JSON.")
@@ -76,13 +74,15 @@ public final class TuneCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        Design d = DesignReader.read(design);
+        board.validate();
+        Design d = board.design();
         Tuner tuner = Tuner.of(d);
         TuneTarget target = target(d);
-        CaptureMeasurement cm = CaptureMeasurement.read(file, capture, spec.commandLine().getErr());
+        BoardInput.Reading in = board.read(spec.commandLine().getErr(), database);
+        CaptureMeasurement cm = in.measurement();
         Measurement m = cm.meter().result();
-        if (m.cycles() == 0) {
-            throw new BadInputException(file.toString(), "no complete cycle was measured: nothing to tune from");
+        if (m.cycles() == 0 && (cm.mono() == null || cm.mono().pulses() == 0)) {
+            throw new BadInputException(in.source(), "no complete cycle was measured: nothing to tune from");
         }
         TuneResult r = cm.mono() != null && d.circuit().topology() == Topology.MONOSTABLE
                 ? tuner.tune(Observations.pulseWidth(cm.mono().pulseWidth(), Observations.clockShare(m)), target)

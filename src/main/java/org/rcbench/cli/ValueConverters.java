@@ -57,6 +57,23 @@ public final class ValueConverters {
         }
     }
 
+    /** Seconds, zero allowed, from {@code 0}, {@code 20ms}, {@code 2 µs}, {@code 150us}. */
+    public static final class TimeOrZero implements ITypeConverter<Double> {
+        @Override
+        public Double convert(String value) {
+            double v;
+            try {
+                v = ValueCode.parseValue(value, Unit.SECOND);
+            } catch (BadInputException e) {
+                throw new TypeConversionException(e.what());
+            }
+            if (!(v >= 0) || Double.isInfinite(v)) {
+                throw new TypeConversionException("\"" + value + "\" is not a time of zero or more");
+            }
+            return v;
+        }
+    }
+
     /** Volts from {@code 9}, {@code 9 V}, {@code 4.5V}. */
     public static final class Voltage implements ITypeConverter<Double> {
         @Override

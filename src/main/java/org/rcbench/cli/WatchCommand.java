@@ -10,11 +10,9 @@ import org.rcbench.source.DemoDesigns;
 import org.rcbench.source.DurationGate;
 import org.rcbench.source.LiveMeasurement;
 import org.rcbench.source.LiveReading;
-import org.rcbench.source.HistoryCalibrations;
 import org.rcbench.source.LiveSource;
 import org.rcbench.source.SourceSpec;
 import org.rcbench.source.StreamStart;
-import org.rcbench.tolerance.Prediction;
 import org.rcbench.tolerance.Predictor;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -24,11 +22,13 @@ import picocli.CommandLine.Spec;
 
 /**
  * {@code rcbench watch}: a live terminal readout of a probe or a simulated board, redrawn a few
- * times a second, with the design's prediction and a verdict per quantity when a design is known.
+ * times a second; with a design, a verdict per quantity, the leading suspect and a tuning step,
+ * re-solved at most once per redraw ({@link WatchJudge}).
  */
 @Command(name = "watch", mixinStandardHelpOptions = true,
         description = {"Show a live readout: frequency, duty, high and low time (or pulse width), jitter; with a design"
-            + " its nominal value, 95 %% band and a verdict per quantity, and a tuning hint for a potentiometer.",
+            + " its nominal value, 95 %% band and a verdict per quantity, the leading suspect, and a tuning step for a"
+                + " potentiometer.",
             "Exit status 1 when a quantity ends outside the design's worst-case band.",
             "Caution: the probe's ground is the computer's ground. Never connect it to mains-referenced or"
                 + " transformerless circuits without isolation; mind charged capacitors."})
@@ -61,7 +61,7 @@ public final class WatchCommand implements Callable<Integer> {
     boolean plain;
 
     @Option(names = "--channel", paramLabel = "N", defaultValue = "0",
-            description = "The timer's output channel (default ${DEFAULT-VALUE}; a monostable's trigger on N+1, a"
+            description = "The timer's output channel (default: ${DEFAULT-VALUE}; a monostable's trigger on N+1, a"
                 + " latch's buttons on N+1 and N+2).")
     int channel;
 
@@ -82,9 +82,9 @@ public final class WatchCommand implements Callable<Integer> {
         SourceSpec sourceSpec = source.sourceSpec();
         Design d = design != null ? DemoDesigns.resolve(design)
                 : sourceSpec instanceof SourceSpec.Simulated sim ? sim.design() : null;
-        Prediction prediction = d == null ? null : new Predictor(20_000, 1).predict(d);
+        WatchJudge judge = d == null ? null : new WatchJudge(d, new Predictor(20_000, 1).predict(d));
         Topology topology = d == null ? null : d.circuit().topology();
-        LiveSource src = source.open(err, calibrations(), sourceSpec);
+        LiveSource src = source.open(err, database.calibrations(), sourceSpec);
         // A fast source with --once reads a fixed stretch of probe time, so that the readout is repeatable.
         Double span = duration != null ? duration : once && source.fast() ? (Double) FAST_ONCE_SECONDS : null;
         DurationGate gate = new DurationGate(span == null ? Double.POSITIVE_INFINITY : span);
@@ -116,14 +116,14 @@ public final class WatchCommand implements Callable<Integer> {
             LiveLoop.run(src, gate, guard, source, span, Math.min(interval, 100), () -> once && (span == null
                     && enough(live[0].latest()) || System.nanoTime() - begun > ONCE_TIMEOUT_NANOS), () -> {
                         if (!once && System.nanoTime() - nextDraw[0] >= 0) {
-                            term.block(WatchView.render(start, src.status(), live[0].latest(), d, prediction).lines());
+                            term.block(WatchView.render(start, src.status(), live[0].latest(), d, judge).lines());
                             nextDraw[0] = System.nanoTime() + interval * 1_000_000L;
                         }
                     });
             SessionStatus before = src.status();
             src.close();
             LiveReading r = live[0].latest();
-            WatchView.Screen screen = WatchView.render(start, src.status(), r, d, prediction);
+            WatchView.Screen screen = WatchView.render(start, src.status(), r, d, judge);
             term.block(screen.lines());
             failed = screen.fails();
             if (before.state().isFinal() && before.state() == org.rcbench.probe.SessionState.FAILED) {
@@ -148,10 +148,5 @@ public final class WatchCommand implements Callable<Integer> {
             return r.monostable().pulses() >= 1;
         }
         return r.measurement().rolling().cycles() >= ONCE_CYCLES;
-    }
-
-    /** The probe calibrations in the history ({@code --db}). */
-    private HistoryCalibrations calibrations() {
-        return SourceOptions.calibrations(database);
     }
 }

@@ -53,10 +53,11 @@ public final class DesignReader {
     private static final Set<String> CONTROL = Set.of("pin", "drive", "drive_ohms");
     private static final Set<String> TRIGGER = Set.of("width", "interval");
     private static final Set<String> PART = Set.of("role", "value", "tolerance", "kind", "tempco", "distribution",
-            "wiper", "drop", "drop_tolerance");
+            "wiper", "travel", "drop", "drop_tolerance");
 
     private final String source;
     private final KeyLines lines;
+    private final Map<String, PotTravel> travels = new LinkedHashMap<>();
 
     private DesignReader(String source, KeyLines lines) {
         this.source = source;
@@ -131,7 +132,7 @@ public final class DesignReader {
         Trigger trigger = trigger(table(root, "trigger", false), topology);
         requireRoles(topology, elements);
         CircuitSpec spec = new CircuitSpec(topology, family, fp, supply, elements, control, trigger);
-        return new Design(source, name, revision, notes, spec, spreads, supplyTol, ambient);
+        return new Design(source, name, revision, notes, spec, spreads, supplyTol, ambient, travels);
     }
 
     private Topology topology(JsonNode timer) {
@@ -273,6 +274,12 @@ public final class DesignReader {
         } else if (role == Role.SPLIT_POT) {
             throw fail(path + ".wiper", "missing: a split pot needs its wiper position (0 to 1)");
         }
+        if (p.has("travel")) {
+            if (type != ElementType.POTENTIOMETER) {
+                throw fail(path + ".travel", "only a potentiometer (a part with a wiper) has a travel");
+            }
+            travels.put(designator, travel(p.get("travel"), path + ".travel"));
+        }
         Tolerance tol = partTolerance(p, path, cv, role);
         Distribution dist = distribution(p, path);
         Tempco tc = null;
@@ -287,7 +294,7 @@ public final class DesignReader {
 
     private Element diode(String designator, Role role, PartKind kind, JsonNode p, String path,
             Map<String, PartSpread> spreads) {
-        for (String k : new String[] {"value", "wiper", "tempco", "tolerance"}) {
+        for (String k : new String[] {"value", "wiper", "travel", "tempco", "tolerance"}) {
             if (p.has(k)) {
                 throw fail(path + "." + k, "a diode takes kind (silicon or schottky) and/or drop, not " + k);
             }
@@ -346,6 +353,23 @@ public final class DesignReader {
             throw fail(path + ".distribution", "unknown distribution \"" + d + "\" (rectangular, triangular or normal)");
         }
         return dist;
+    }
+
+    /** A potentiometer's travel: {@code "270 deg"} or {@code "25 turns"}. */
+    private PotTravel travel(JsonNode n, String path) {
+        if (n.isNumber()) {
+            throw fail(path, "give the unit: \"" + n.asText() + " deg\" (a single-turn pot) or \"" + n.asText()
+                    + " turns\" (a multi-turn trimmer)");
+        }
+        if (!n.isTextual()) {
+            throw fail(path, "write the travel as text, e.g. \"270 deg\" or \"25 turns\"");
+        }
+        PotTravel t = PotTravel.parse(n.asText());
+        if (t == null) {
+            throw fail(path, "\"" + n.asText() + "\" is not a travel above zero: write e.g. \"270 deg\" (a"
+                    + " single-turn pot) or \"25 turns\" (a multi-turn trimmer)");
+        }
+        return t;
     }
 
     private double wiper(JsonNode n, String path) {

@@ -90,6 +90,9 @@ public final class DesignText {
                 }
                 if (e.type() == ElementType.POTENTIOMETER) {
                     sb.append("wiper = ").append(plain(e.wiper())).append('\n');
+                    if (d.travel(e.designator()) != null) {
+                        kv(sb, "travel", d.travel(e.designator()).text());
+                    }
                 }
                 if (s.tempco() != null && !(e.kind() == PartKind.C0G && s.tempco().equals(Tempco.C0G))) {
                     kv(sb, "tempco", s.tempco().halfWidthPpmPerKelvin() == 0

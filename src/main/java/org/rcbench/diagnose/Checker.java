@@ -108,12 +108,26 @@ public final class Checker {
     }
 
     private void add(List<QuantityCheck> out, TimingQuantity q, double measured, double u) {
+        QuantityCheck c = judge(q, measured, u);
+        if (c != null) {
+            out.add(c);
+        }
+    }
+
+    /**
+     * One quantity against the prediction, by the rules of {@link QuantityCheck#status} (what a
+     * live view judges its newest figures by); null when the prediction has no band for {@code q}
+     * or {@code measured} is not a number.
+     *
+     * @param u the expanded uncertainty (k = 2) of {@code measured}, or NaN
+     */
+    public QuantityCheck judge(TimingQuantity q, double measured, double u) {
         if (!prediction.quantities().contains(q) || !Double.isFinite(measured)) {
-            return;
+            return null;
         }
         Band stat = prediction.statistical(q);
         Band wc = prediction.worstCase(q);
-        out.add(new QuantityCheck(q, measured, u, prediction.nominal(q), stat, wc, QuantityCheck.status(measured, stat, wc)));
+        return new QuantityCheck(q, measured, u, prediction.nominal(q), stat, wc, QuantityCheck.status(measured, stat, wc));
     }
 
     private String reason(Verdict v, QuantityCheck worst) {
@@ -137,7 +151,7 @@ public final class Checker {
         StringBuilder sb = new StringBuilder(monostable ? "not running: no complete output pulse was measured"
                 : "not running: no complete cycle was measured");
         sb.append(m.edges() == 0 ? " (no edge on channel " + m.channel() + ")"
-                : " (" + m.edges() + " edges on channel " + m.channel() + ")");
+                : " (" + m.edges() + (m.edges() == 1 ? " edge" : " edges") + " on channel " + m.channel() + ")");
         if (!prediction.runs()) {
             sb.append("; the design itself should not run: ").append(prediction.reason());
         } else {

@@ -17,8 +17,10 @@ package org.rcbench.diagnose;
  * @param rangeHigh       the greatest value over the whole travel
  * @param change          {@code wanted - present}, as a fraction of the travel (positive: toward 1)
  * @param advice          which way and how far to turn, in words
+ * @param step            the same in one short line for a live view, e.g. {@code VR1 0.60 → 0.50 of its
+ *                        travel (about 27° of 270°): more of the track on the discharge side}
  */
 public record TuneResult(String pot, TuneTarget target, double present, double presentLow, double presentHigh,
         double wanted, boolean reachable, double reached, double rangeLow, double rangeHigh, double change,
-        String advice) {
+        String advice, String step) {
 }

@@ -10,6 +10,7 @@ import org.rcbench.circuit.Role;
 import org.rcbench.circuit.Timing;
 import org.rcbench.common.BadInputException;
 import org.rcbench.design.Design;
+import org.rcbench.design.PotTravel;
 import org.rcbench.measure.Measurement;
 
 /**
@@ -22,7 +23,8 @@ import org.rcbench.measure.Measurement;
  * {@code q(w) = target} with every other parameter at the most probable explanation's MAP (a
  * 201-point scan of the travel brackets the root nearest the present position, Commons Math's
  * {@link BrentSolver} refines it to 1e-6 of the travel). Out of reach, the nearest end is given with
- * the range the pot covers. Thread-safe and immutable.
+ * the range the pot covers. The turn is stated in degrees or turns too when the target gives the
+ * pot's travel, else when the design file does ({@code travel = "270 deg"}). Thread-safe and immutable.
  */
 public final class Tuner {
     private static final int SCAN = 200;
@@ -69,6 +71,7 @@ public final class Tuner {
             throw new BadInputException("--pot", "the design has several potentiometers (" + String.join(", ", pots)
                     + "): name one");
         }
+        t = withDesignTravel(t, pot);
         Target target = Target.of(dm, o);
         if (target == null) {
             throw new BadInputException("tune", "nothing was measured to tune from");
@@ -113,7 +116,16 @@ public final class Tuner {
         double change = wanted - now.value();
         String advice = advice(pot, t, now, wanted, change, reachable, reached, lo, hi);
         return new TuneResult(pot, t, now.value(), now.low(), now.high(), wanted, reachable, reached, lo, hi, change,
-                advice);
+                advice, step(pot, t, now.value(), wanted, change, reachable, lo, hi));
+    }
+
+    /** {@code t} with the design's travel of {@code pot} ({@code travel} in the design file) when {@code t} states none. */
+    private TuneTarget withDesignTravel(TuneTarget t, String pot) {
+        PotTravel travel = dm.design.travel(pot);
+        if (travel == null || !Double.isNaN(t.travelDegrees()) || !Double.isNaN(t.turns())) {
+            return t;
+        }
+        return Double.isNaN(travel.turns()) ? t.withTravelDegrees(travel.degrees()) : t.withTurns(travel.turns());
     }
 
     private double[] parameters(Fit f) {
@@ -196,6 +208,26 @@ public final class Tuner {
         sb.append(". Which way that is depends on how ").append(pot)
                 .append(" is wired: turn a little, re-measure, and follow the change.");
         return sb.toString();
+    }
+
+    /** {@link TuneResult#step}: the advice in one short line. */
+    private String step(String pot, TuneTarget t, double present, double wanted, double change, boolean reachable,
+            double lo, double hi) {
+        String q = Words.name(t.quantity()) + " " + Words.value(t.quantity(), t.value());
+        if (!reachable) {
+            return String.format(Locale.ROOT, "no position of %s gives %s (its travel covers %s .. %s)", pot, q,
+                    Words.value(t.quantity(), lo), Words.value(t.quantity(), hi));
+        }
+        if (Math.abs(change) < 0.005) {
+            return String.format(Locale.ROOT, "%s is on target for %s: leave it", pot, q);
+        }
+        String turn = !Double.isNaN(t.turns())
+                ? String.format(Locale.ROOT, " (about %.1f of %s turns)", Math.abs(change) * t.turns(), trim(t.turns()))
+                : !Double.isNaN(t.travelDegrees()) ? String.format(Locale.ROOT, " (about %.0f° of %s°)",
+                        Math.abs(change) * t.travelDegrees(), trim(t.travelDegrees())) : "";
+        String way = direction(pot, change);
+        return String.format(Locale.ROOT, "%s %.2f → %.2f of its travel%s for %s: %s", pot, present, wanted, turn, q,
+                way.contains(" (") ? way.substring(0, way.indexOf(" (")) : way);
     }
 
     /** The direction in terms of the circuit, not the knob: which part of the track the move puts where. */

@@ -34,7 +34,7 @@ import org.rcbench.units.Tolerance;
  * {@code "+50/-20%"}), {@code tolerance_pct}, or {@code tolerance_minus} and {@code tolerance_plus};
  * {@code suspects} (array, in rank order) with {@code part}, {@code value}, {@code nominal},
  * {@code deviation}, {@code probability}; {@code ambiguities} (strings); and the plot data
- * {@code histogram} {@code {edges_s, counts}} and {@code trend} {@code [{t_s, frequency_hz}]}.
+ * {@code histogram} {@code {edges_s, counts}} (both empty: none) and {@code trend} {@code [{t_s, frequency_hz}]}.
  * Unknown keys are ignored; missing numbers and {@code null} are NaN. Plot data is made compact: at
  * most {@value #MAX_BINS} bins (neighbours merged) and {@value #MAX_TREND_POINTS} trend points
  * (averaged in equal runs). Stateless and thread-safe.
@@ -274,6 +274,9 @@ public final class CheckDocument {
         }
         JsonNode edges = h.get("edges_s");
         JsonNode counts = h.get("counts");
+        if (edges != null && counts != null && edges.isArray() && counts.isArray() && edges.isEmpty() && counts.isEmpty()) {
+            return null; // a check that measured no cycle (a stopped board) has no histogram
+        }
         if (edges == null || counts == null || !edges.isArray() || !counts.isArray()
                 || edges.size() != counts.size() + 1 || counts.isEmpty()) {
             throw new BadInputException(WHERE, "histogram needs edges_s (n+1 numbers) and counts (n numbers)");

@@ -1,5 +1,8 @@
 package org.rcbench.json;
 
+import static org.rcbench.json.JsonNumbers.band;
+import static org.rcbench.json.JsonNumbers.number;
+
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -13,7 +16,6 @@ import org.rcbench.diagnose.QuantityCheck;
 import org.rcbench.diagnose.Suspect;
 import org.rcbench.diagnose.TuneResult;
 import org.rcbench.measure.FrequencyTrend;
-import org.rcbench.tolerance.Band;
 import org.rcbench.units.Tolerance;
 import org.rcbench.units.Unit;
 
@@ -61,9 +63,9 @@ public final class CheckJson {
         ObjectNode checks = o.putObject("checks");
         for (QuantityCheck c : r.checks()) {
             ObjectNode q = checks.putObject(c.quantity().jsonKey());
-            put(q, "measured", c.measured());
-            put(q, "measured_u", c.uncertainty());
-            put(q, "nominal", c.nominal());
+            number(q, "measured", c.measured());
+            number(q, "measured_u", c.uncertainty());
+            number(q, "nominal", c.nominal());
             band(q, "band", c.statistical());
             band(q, "worst_case", c.worstCase());
             q.put("status", c.status().fileName());
@@ -87,11 +89,11 @@ public final class CheckJson {
         ObjectNode est = o.putObject("estimates");
         for (Estimate e : d.estimates()) {
             ObjectNode x = est.putObject(e.name());
-            put(x, "value", e.value());
+            number(x, "value", e.value());
             x.put("unit", unit(e.unit()));
-            put(x, "nominal", e.nominal());
-            put(x, "low", e.low());
-            put(x, "high", e.high());
+            number(x, "nominal", e.nominal());
+            number(x, "low", e.low());
+            number(x, "high", e.high());
         }
         ArrayNode sus = o.putArray("suspects");
         for (Suspect s : d.suspects()) {
@@ -99,14 +101,14 @@ public final class CheckJson {
             x.put("part", s.name());
             x.put("kind", s.kind().fileName());
             x.put("label", s.label());
-            put(x, "value", s.value());
+            number(x, "value", s.value());
             x.put("unit", unit(s.unit()));
-            put(x, "nominal", s.nominal());
-            put(x, "deviation", s.deviation());
-            put(x, "deviation_tolerances", s.toleranceMultiple());
-            put(x, "probability", s.probability());
-            put(x, "low", s.low());
-            put(x, "high", s.high());
+            number(x, "nominal", s.nominal());
+            number(x, "deviation", s.deviation());
+            number(x, "deviation_tolerances", s.toleranceMultiple());
+            number(x, "probability", s.probability());
+            number(x, "low", s.low());
+            number(x, "high", s.high());
         }
         ArrayNode amb = o.putArray("ambiguities");
         for (Ambiguity a : d.ambiguities()) {
@@ -114,37 +116,38 @@ public final class CheckJson {
         }
         ObjectNode dx = o.putObject("diagnosis");
         dx.put("summary", d.summary());
-        put(dx, "no_fault_probability", d.noFaultProbability());
+        number(dx, "no_fault_probability", d.noFaultProbability());
         dx.put("fits_well", d.fitsWell());
         ArrayNode ex = dx.putArray("explanations");
         for (Explanation e : d.explanations()) {
             ObjectNode x = ex.addObject();
             x.put("label", e.label());
-            put(x, "probability", e.probability());
-            put(x, "misfit", e.misfit());
+            number(x, "probability", e.probability());
+            number(x, "misfit", e.misfit());
         }
         return o;
     }
 
-    /** The {@code tune --json} object: the wiper now, where it should go, and the advice. */
+    /** The {@code tune --json} object: the wiper now, where it should go, and the advice (also as one short {@code step}). */
     public static ObjectNode of(TuneResult t) {
         ObjectNode o = F.objectNode();
         o.put("pot", t.pot());
         o.put("target_quantity", t.target().quantity().jsonKey());
-        put(o, "target", t.target().value());
-        put(o, "wiper", t.present());
-        put(o, "wiper_low", t.presentLow());
-        put(o, "wiper_high", t.presentHigh());
-        put(o, "wanted_wiper", t.wanted());
+        number(o, "target", t.target().value());
+        number(o, "wiper", t.present());
+        number(o, "wiper_low", t.presentLow());
+        number(o, "wiper_high", t.presentHigh());
+        number(o, "wanted_wiper", t.wanted());
         o.put("reachable", t.reachable());
-        put(o, "reached", t.reached());
+        number(o, "reached", t.reached());
         ArrayNode range = o.putArray("range");
         range.add(t.rangeLow());
         range.add(t.rangeHigh());
-        put(o, "change", t.change());
-        put(o, "travel_degrees", t.target().travelDegrees());
-        put(o, "turns", t.target().turns());
+        number(o, "change", t.change());
+        number(o, "travel_degrees", t.target().travelDegrees());
+        number(o, "turns", t.target().turns());
         o.put("advice", t.advice());
+        o.put("step", t.step());
         return o;
     }
 
@@ -167,8 +170,8 @@ public final class CheckJson {
         }
         for (int i = 0; i < t.size(); i++) {
             ObjectNode p = a.addObject();
-            put(p, "t_s", t.timeSeconds()[i]);
-            put(p, "frequency_hz", t.frequencyHz()[i]);
+            number(p, "t_s", t.timeSeconds()[i]);
+            number(p, "frequency_hz", t.frequencyHz()[i]);
         }
     }
 
@@ -178,24 +181,6 @@ public final class CheckJson {
             case OHM: return "ohm";
             case NONE: return "";
             default: return u.symbol();
-        }
-    }
-
-    private static void band(ObjectNode o, String key, Band b) {
-        if (!b.isDefined()) {
-            o.putNull(key);
-            return;
-        }
-        ArrayNode a = o.putArray(key);
-        a.add(b.low());
-        a.add(b.high());
-    }
-
-    private static void put(ObjectNode o, String key, double v) {
-        if (Double.isFinite(v)) {
-            o.put(key, v);
-        } else {
-            o.putNull(key);
         }
     }
 }

@@ -1,5 +1,8 @@
 package org.rcbench.json;
 
+import static org.rcbench.json.JsonNumbers.band;
+import static org.rcbench.json.JsonNumbers.number;
+
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
@@ -90,23 +93,5 @@ public final class PredictionJson {
             return l;
         }
         return REQUIRED;
-    }
-
-    private static void number(ObjectNode o, String key, double v) {
-        if (Double.isFinite(v)) {
-            o.put(key, v);
-        } else {
-            o.putNull(key);
-        }
-    }
-
-    private static void band(ObjectNode o, String key, Band b) {
-        if (!b.isDefined() || !Double.isFinite(b.low()) || !Double.isFinite(b.high())) {
-            o.putNull(key);
-            return;
-        }
-        ArrayNode a = o.putArray(key);
-        a.add(b.low());
-        a.add(b.high());
     }
 }

@@ -1,5 +1,6 @@
 package org.rcbench.measure;
 
+import java.util.Objects;
 import org.rcbench.edge.EdgeSink;
 
 /**
@@ -31,7 +32,9 @@ import org.rcbench.edge.EdgeSink;
  * until the first cycle that agrees; this removes the long first cycle after power-up
  * ({@code (Ra+Rb) C ln 3} instead of {@code ln 2}) and supply or control-pin settling.</li>
  * </ol>
- * Accepted cycles go to the statistics ({@link CycleStatistics}).
+ * Accepted cycles go to the statistics ({@link CycleStatistics}); every cycle formed, settling ones
+ * flagged, goes to the {@link CycleListener} given at construction (export and plots use it, so
+ * there is one definition of a cycle).
  *
  * <p>Not thread-safe: feed it from one thread and call {@link #snapshot()} from that same thread
  * (it costs microseconds plus a pass over the MTIE record), handing the immutable result to other
@@ -44,6 +47,7 @@ public final class CycleMeter implements EdgeSink {
     private final int channel;
     private final RecentMedians typical = new RecentMedians();
     private final CycleStatistics stats;
+    private final CycleListener listener;
 
     private final long[] aheadTicks;
     private final int[] aheadLevels;
@@ -61,6 +65,9 @@ public final class CycleMeter implements EdgeSink {
     private long rise = -1;
     private long fall = -1;
     private boolean broken = true;
+    private boolean contiguous;
+    private boolean glitchPending;
+    private boolean glitchInCycle;
     private boolean inGap;
 
     private boolean settling = true;
@@ -80,7 +87,13 @@ public final class CycleMeter implements EdgeSink {
     private boolean ended;
 
     public CycleMeter(MeterConfig config) {
+        this(config, CycleListener.NONE);
+    }
+
+    /** A meter that also reports each cycle it forms to {@code listener} (on the feeding thread). */
+    public CycleMeter(MeterConfig config, CycleListener listener) {
         this.config = config;
+        this.listener = Objects.requireNonNull(listener, "listener");
         this.channel = config.channel();
         int n = 2 * config.lookAheadCycles() + 2;
         aheadTicks = new long[n];
@@ -188,11 +201,13 @@ public final class CycleMeter implements EdgeSink {
             if (olderRunt && newerRunt
                     && relative(pendingTickB, pendingLevelB, tick) < relative(pendingTickA, pendingLevelA, pendingTickB)) {
                 glitches++;
+                glitchPending = true;
                 pendingLevelB = NONE;
                 return;
             }
             if (olderRunt) {
                 glitches++;
+                glitchPending = true;
                 pendingTickA = tick;
                 pendingLevelA = level;
                 pendingAIsFirst = false;
@@ -255,12 +270,16 @@ public final class CycleMeter implements EdgeSink {
         }
         lastTick = tick;
         lastLevel = level;
+        // A glitch removed since the last committed edge lies inside the cycle in progress.
+        glitchInCycle |= glitchPending && rise >= 0;
+        glitchPending = false;
         if (level == HIGH) {
             if (rise >= 0 && fall >= 0) {
                 cycle(rise, fall - rise, tick - fall);
             }
             rise = tick;
             fall = -1;
+            glitchInCycle = false;
         } else if (rise >= 0) {
             fall = tick;
         }
@@ -275,20 +294,26 @@ public final class CycleMeter implements EdgeSink {
         rise = -1;
         fall = -1;
         broken = true;
+        contiguous = false;
+        glitchInCycle = false;
     }
 
     private void cycle(long start, long high, long low) {
         typical.add(high, low);
+        int flags = (contiguous ? 0 : CycleListener.NEW_RUN) | (glitchInCycle ? CycleListener.GLITCH_REMOVED : 0);
+        contiguous = true;
         if (settling) {
             if (!agreesWithTypical(high, low)) {
                 settlingCycles++;
                 broken = true;
+                listener.onCycle(start, high, low, flags | CycleListener.SETTLING);
                 return;
             }
             settling = false;
         }
         stats.accept(start, high, low, broken);
         broken = false;
+        listener.onCycle(start, high, low, flags);
     }
 
     private boolean agreesWithTypical(long high, long low) {

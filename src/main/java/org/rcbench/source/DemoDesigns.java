@@ -3,6 +3,8 @@ package org.rcbench.source;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.List;
 import org.rcbench.common.BadInputException;
@@ -28,16 +30,29 @@ public final class DemoDesigns {
 
     /** The design named {@code spec}: {@code demo:NAME}, or a design file's path. */
     public static Design resolve(String spec) {
+        return spec.startsWith(PREFIX) ? DesignReader.parse(text(spec), spec) : DesignReader.read(Path.of(spec));
+    }
+
+    /** The text of the design named {@code spec} (as {@link #resolve}), for storing it with a run. */
+    public static String text(String spec) {
         if (!spec.startsWith(PREFIX)) {
-            return DesignReader.read(Path.of(spec));
+            Path file = Path.of(spec);
+            try {
+                return Files.readString(file, StandardCharsets.UTF_8);
+            } catch (NoSuchFileException e) {
+                throw new BadInputException(spec, "no such file", e);
+            } catch (IOException e) {
+                throw new BadInputException(spec, "cannot read: " + e.getMessage(), e);
+            }
         }
         String name = spec.substring(PREFIX.length());
-        try (InputStream in = DemoDesigns.class.getResourceAsStream("/org/rcbench/demo/" + name + ".toml")) {
-            if (in == null || name.contains("/")) {
+        try (InputStream in = name.contains("/") ? null
+                : DemoDesigns.class.getResourceAsStream("/org/rcbench/demo/" + name + ".toml")) {
+            if (in == null) {
                 throw new BadInputException(spec, "no such built-in design (" + PREFIX + String.join(", " + PREFIX, NAMES)
                         + ")");
             }
-            return DesignReader.parse(new String(in.readAllBytes(), StandardCharsets.UTF_8), spec);
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
         } catch (IOException e) {
             throw new BadInputException(spec, "cannot read the built-in design: " + e.getMessage(), e);
         }

@@ -2,6 +2,8 @@ package org.rcbench.cli;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.ByteArrayOutputStream;
 import java.io.Reader;
 import java.io.StringReader;
@@ -12,8 +14,6 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
 import org.junit.jupiter.api.Test;
@@ -65,25 +65,27 @@ class ExportCommandTest {
         Path out = dir.resolve("cycles.csv");
         CliRun run = CliRun.of("export", "cycles", capture().toString(), "-o", out.toString());
         assertThat(run.exitCode()).as(run.err()).isZero();
-        // 50 rises: the first only sets the level; cycle 30 -> 31 is cut by the gap and 31 follows it,
-        // so whole cycles are 1->2 ... 29->30 (29 of them) and 32->33 ... 48->49 (17): 46.
-        assertThat(run.err()).isEqualTo("rcbench: 46 cycles of channel 0 written to " + out
+        // 50 rises (0 .. 49): cycle 30 -> 31 is cut by the gap after rise 30, so the cycles are
+        // 0->1 ... 29->30 (30 of them) and 31->32 ... 48->49 (18): 48; 31 starts a new run.
+        assertThat(run.err()).isEqualTo("rcbench: 48 cycles of channel 0 written to " + out
                 + " (1 gap: no cycle spans it)\n");
         List<CSVRecord> rows = csv(Files.readString(out));
-        assertThat(rows).hasSize(46);
+        assertThat(rows).hasSize(48);
+        assertThat(rows).filteredOn(r -> r.get("flags").equals("new-run")).extracting(r -> r.get("start_tick"))
+                .containsExactly("1000", String.valueOf(1000 + 16000 * 31));
         for (CSVRecord r : rows) {
             assertThat(Double.parseDouble(r.get("period_s"))).isEqualTo(0.001); // 16000 / 16 MHz
             assertThat(Double.parseDouble(r.get("high_s"))).isEqualTo(5200 / 16e6);
             assertThat(Double.parseDouble(r.get("duty"))).isEqualTo(0.325);
         }
-        assertThat(rows.get(0).get("start_tick")).isEqualTo("17000");
+        assertThat(rows.get(0).get("start_tick")).isEqualTo("1000");
     }
 
     @Test
     void cyclesOfANamedChannelToStdout() throws Exception {
         CliRun run = CliRun.of("export", "cycles", capture().toString(), "--channel", "trigger");
         assertThat(run.exitCode()).as(run.err()).isZero();
-        assertThat(run.out()).isEqualTo("cycle,start_tick,start_s,period_s,high_s,low_s,duty\r\n"); // one pulse, no cycle
+        assertThat(run.out()).isEqualTo("cycle,start_tick,start_s,period_s,high_s,low_s,duty,flags\r\n"); // one pulse, no cycle
     }
 
     @Test

@@ -69,4 +69,16 @@ class TuneCommandTest {
         assertThat(width.exitCode()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(width.err()).contains("only a monostable has a pulse width");
     }
+
+    // check-values.md, pot PWM: the duty is linear in the wiper (0.2574 at 0.25, 0.5050 at 0.5), so a
+    // wiper at 0.6 is 0.10 of the travel from the design's 0.5; the demo Lumen's VR1 has travel =
+    // "270 deg" in its design file, so that is 27°.
+    @Test
+    void liveFromASimulatedBoardWithTheTravelFromTheDesign() {
+        CliRun run = CliRun.of("tune", "--sim", "demo:lumen-dm1", "--fault", "VR1.wiper=0.6", "--duty", "0.4959",
+                "--db", dir.resolve("history.db").toString());
+        assertThat(run.exitCode()).as(run.err()).isZero();
+        assertThat(run.out()).startsWith("VR1's wiper is now at about 0.60").contains("move it to 0.50")
+                .contains("by 0.10 of the travel (about 27° of its 270° travel)");
+    }
 }

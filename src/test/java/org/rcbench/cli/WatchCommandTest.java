@@ -9,7 +9,17 @@ import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.rcbench.design.Design;
+import org.rcbench.diagnose.Words;
+import org.rcbench.measure.CycleMeter;
+import org.rcbench.measure.MeterConfig;
+import org.rcbench.sim.Deviation;
+import org.rcbench.sim.SimulationSpec;
+import org.rcbench.sim.VirtualBoard;
+import org.rcbench.source.DemoDesigns;
+import org.rcbench.source.LiveReading;
 import org.rcbench.testing.CliRun;
+import org.rcbench.tolerance.Predictor;
 
 /** {@code rcbench watch}, in-process, on simulated boards at fast pace (plain output: no terminal here). */
 class WatchCommandTest {
@@ -29,16 +39,18 @@ class WatchCommandTest {
     }
 
     // check-values.md, "Signatures": a pure capacitance change scales high and low time by the same
-    // factor; C1 -25 % gives 0.75 of each, a frequency 1/0.75 - 1 = +33.3 % from nominal.
+    // factor; C1 -25 % gives 0.75 of each, a frequency 1/0.75 - 1 = +33.3 % from nominal, and the
+    // back-solved C1 is 0.75 of 100 nF.
     @Test
     void anAgedCapacitorReadsOutOfBandWithTheRightSignature(@TempDir Path dir) {
         CliRun r = watch(dir, "--sim", "demo:piper-mk2", "--fault", "C1=-25%", "--once");
         assertThat(r.exitCode()).as(r.err()).isEqualTo(ExitCodes.CHECK_FAILED);
-        assertThat(line(r.out(), "frequency")).endsWith("OUT of worst case (+33.3 %)");
-        assertThat(line(r.out(), "high")).endsWith("OUT of worst case (-25.0 %)");
-        assertThat(line(r.out(), "low")).endsWith("OUT of worst case (-25.0 %)");
-        assertThat(line(r.out(), "duty")).endsWith("ok, in the 95 % band");
-        assertThat(r.out()).contains("  board: OUT OF BAND");
+        assertThat(line(r.out(), "frequency")).endsWith("fail (+33.3 %)");
+        assertThat(line(r.out(), "high")).endsWith("fail (-25.0 %)");
+        assertThat(line(r.out(), "low")).endsWith("fail (-25.0 %)");
+        assertThat(line(r.out(), "duty")).endsWith("pass");
+        assertThat(line(r.out(), "top suspect:")).startsWith("  top suspect: C1 at 75.").contains("(-24.");
+        assertThat(r.out()).contains("  verdict: FAIL, outside the worst case");
     }
 
     @Test
@@ -48,21 +60,23 @@ class WatchCommandTest {
         CliRun p = CliRun.of("predict", "--json", "captures/piper-mk2.toml");
         double nominal = new ObjectMapper().readTree(p.out()).at("/nominal/frequency_hz").asDouble();
         String f = line(r.out(), "frequency");
-        assertThat(f).contains(PredictCommand.value(org.rcbench.circuit.TimingQuantity.FREQUENCY, nominal))
-                .endsWith("ok, in the 95 % band");
-        assertThat(r.out()).contains("  board: within the design's bands");
+        assertThat(f).contains(Words.value(org.rcbench.circuit.TimingQuantity.FREQUENCY, nominal))
+                .endsWith("pass");
+        assertThat(r.out()).contains("  verdict: PASS, every quantity inside its 95 % band")
+                .contains("  diagnosis: No part needs to be outside its band");
         assertThat(r.err()).doesNotContain("Exception");
     }
 
     // check-values.md: pot PWM period (R1 + P) C k at any wiper, duty 0.0099 / 0.2574 / 0.5050 / 1.0000
-    // at wiper 0 / 0.25 / 0.5 / 1: duty is linear in the wiper, so a wiper 0.1 off is 10 % of the travel.
+    // at wiper 0 / 0.25 / 0.5 / 1: duty is linear in the wiper, so a wiper at 0.6 goes back to the
+    // design's 0.5, a tenth of the travel: 27° of the demo VR1's 270° (its design file's travel).
     @Test
-    void aPotentiometerOffItsSettingGetsATuningHint(@TempDir Path dir) {
+    void aPotentiometerOffItsSettingGetsATuningStep(@TempDir Path dir) {
         CliRun r = watch(dir, "--sim", "demo:lumen-dm1", "--fault", "VR1.wiper=0.6", "--once");
-        assertThat(r.out()).contains("  tuning: turn VR1 about 10 % of its travel toward its wiper=0 end to bring the"
-                + " duty to nominal");
+        assertThat(r.out()).contains("  tuning: VR1 0.60 → 0.50 of its travel (about 27° of 270°) for duty 49.59 %:"
+                + " more of the track on the discharge side\n");
         CliRun ok = watch(dir, "--sim", "demo:lumen-dm1", "--once");
-        assertThat(ok.out()).contains("  tuning: VR1 is on target");
+        assertThat(ok.out()).contains("  tuning: VR1 is on target for duty 49.59 %: leave it\n");
     }
 
     @Test
@@ -70,7 +84,7 @@ class WatchCommandTest {
         CliRun r = watch(dir, "--sim", "demo:wren", "--once");
         assertThat(r.exitCode()).as(r.err()).isEqualTo(ExitCodes.OK);
         assertThat(line(r.out(), "triggers")).contains("2 pulses timed");
-        assertThat(line(r.out(), "pulse width")).endsWith("ok, in the 95 % band");
+        assertThat(line(r.out(), "pulse width")).endsWith("pass");
     }
 
     @Test
@@ -102,8 +116,8 @@ class WatchCommandTest {
                 "--db", dir.resolve("history.db").toString());
         CliRun r = watch(dir, "--replay", file.toString(), "--once");
         assertThat(r.exitCode()).as(r.err()).isEqualTo(ExitCodes.OK);
-        assertThat(r.out()).doesNotContain("board:").doesNotContain("band");
-        assertThat(line(r.out(), "frequency")).doesNotContain("ok");
+        assertThat(r.out()).doesNotContain("verdict").doesNotContain("band").doesNotContain("diagnosis");
+        assertThat(line(r.out(), "frequency")).doesNotContain("pass");
     }
 
     @Test
@@ -131,5 +145,24 @@ class WatchCommandTest {
     void helpTextsShowTheirPercentSigns() {
         CliRun w = CliRun.of("watch", "--help");
         assertThat(w.out()).contains("95 % band").contains("C1=-35%, R2=12k").contains("+2%@30s").doesNotContain("%%");
+    }
+
+    /** The judge re-solves only for a new reading: asking again for the same one costs nothing. */
+    @Test
+    void theDiagnosisIsSolvedOncePerReading() {
+        Design d = DemoDesigns.resolve("demo:piper-mk2");
+        VirtualBoard board = VirtualBoard.of(d, SimulationSpec.defaults()
+                .withDeviations(List.of(Deviation.parse("C1=-25%"))));
+        CycleMeter meter = new CycleMeter(
+                MeterConfig.of(0, board.timebase()));
+        board.runFor(1.0, meter);
+        WatchJudge judge = new WatchJudge(d, new Predictor(2000, 1).predict(d));
+        LiveReading r = new LiveReading(meter.snapshot(), null, null, 0, 0, 1.0, false);
+        WatchJudge.Judgement first = judge.of(r);
+        assertThat(judge.of(r)).isSameAs(first);
+        assertThat(first.diagnosis().topSuspect().name()).isEqualTo("C1");
+        LiveReading next = new LiveReading(meter.snapshot(), null, null, 0, 0, 1.0,
+                false);
+        assertThat(judge.of(next)).isNotSameAs(first);
     }
 }

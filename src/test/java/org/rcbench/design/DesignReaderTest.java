@@ -167,6 +167,53 @@ class DesignReaderTest {
                 .hasMessage("t.toml:15: parts.R2.wiper: wiper position 1.5 is outside 0 to 1");
     }
 
+    /** A split pot with {@code travel = TEXT}. */
+    private static String potWithTravel(String travel) {
+        return String.join("\n", "[timer]", "topology = \"pwm-pot\"", "family = \"cmos\"", "supply = 12",
+                "[parts.R1]", "role = \"charge\"", "value = \"1k0\"", "tolerance = \"1%\"",
+                "[parts.VR1]", "role = \"split-pot\"", "value = \"100k\"", "tolerance = \"20%\"", "wiper = 0.5",
+                "travel = " + travel,
+                "[parts.D1]", "role = \"charge-diode\"", "kind = \"silicon\"",
+                "[parts.D2]", "role = \"discharge-diode\"", "kind = \"silicon\"",
+                "[parts.C1]", "role = \"timing\"", "value = \"10n\"", "tolerance = \"5%\"", "");
+    }
+
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', value = {
+        "\"270 deg\"     | 270 | NaN",
+        "\"270°\"        | 270 | NaN",
+        "\"300 Degrees\" | 300 | NaN",
+        "\"25 turns\"    | NaN | 25",
+        "\"1 turn\"      | NaN | 1",
+        "\"3.75turns\"   | NaN | 3.75",
+    })
+    void aPotMayStateItsTravel(String text, double degrees, double turns) {
+        Design d = DesignReader.parse(potWithTravel(text.strip()), "t.toml");
+        assertThat(d.travel("VR1")).isEqualTo(new PotTravel(degrees, turns));
+        assertThat(d.travel("R1")).isNull();
+    }
+
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', value = {
+        "270           | t.toml:14: parts.VR1.travel: give the unit: \"270 deg\" (a single-turn pot) or \"270 turns\" (a multi-turn trimmer)",
+        "\"270 rad\"    | t.toml:14: parts.VR1.travel: \"270 rad\" is not a travel above zero: write e.g. \"270 deg\"",
+        "\"0 turns\"    | t.toml:14: parts.VR1.travel: \"0 turns\" is not a travel above zero",
+        "\"-10 deg\"    | t.toml:14: parts.VR1.travel: \"-10 deg\" is not a travel above zero",
+        "\"NaN deg\"    | t.toml:14: parts.VR1.travel: \"NaN deg\" is not a travel above zero",
+        "[270]         | t.toml:14: parts.VR1.travel: write the travel as text, e.g. \"270 deg\" or \"25 turns\"",
+    })
+    void aBadTravelIsOneLine(String text, String message) {
+        assertThatThrownBy(() -> DesignReader.parse(potWithTravel(text.strip()), "t.toml"))
+                .isInstanceOf(BadInputException.class).hasMessageStartingWith(message.strip()).hasMessageNotContaining("\n");
+    }
+
+    @Test
+    void onlyAPotHasATravel() {
+        String text = ASTABLE.replace("value = \"10k\"\ntolerance = \"J\"", "value = \"10k\"\ntolerance = \"J\"\ntravel = \"270 deg\"");
+        assertThatThrownBy(() -> DesignReader.parse(text, "t.toml"))
+                .hasMessage("t.toml:15: parts.R2.travel: only a potentiometer (a part with a wiper) has a travel");
+    }
+
     /** The example designs in captures/ are valid files (a smoke check of the demo data, not of numbers). */
     @Test
     void everyExampleDesignReads() throws IOException {

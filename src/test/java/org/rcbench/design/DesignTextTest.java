@@ -21,7 +21,19 @@ class DesignTextTest {
                 assertThat(back.supplyTolerance()).isEqualTo(d.supplyTolerance());
                 assertThat(back.ambient()).isEqualTo(d.ambient());
                 assertThat(back.title()).isEqualTo(d.title());
+                assertThat(back.travels()).as(p.toString()).isEqualTo(d.travels());
             }
         }
+    }
+
+    @Test
+    void aPotsTravelIsWrittenAndReadBack() {
+        Design d = DesignReader.read(Path.of("captures/lumen-dm1.toml"));
+        assertThat(d.travel("VR1")).isEqualTo(PotTravel.ofDegrees(270));
+        Design turns = new Design(d.source(), d.boardName(), d.revision(), d.notes(), d.circuit(), d.spreads(),
+                d.supplyTolerance(), d.ambient(), java.util.Map.of("VR1", PotTravel.ofTurns(25)));
+        String text = DesignText.toToml(turns);
+        assertThat(text).contains("travel = \"25 turns\"\n");
+        assertThat(DesignReader.parse(text, "x.toml").travel("VR1")).isEqualTo(PotTravel.ofTurns(25));
     }
 }

@@ -40,6 +40,24 @@ class TunerTest {
         assertThat(r.advice()).contains("0.50").contains("charge side").contains("° of its 270° travel");
     }
 
+    // The same tuning with the pot's travel in the design file instead of an option: a quarter of the
+    // travel of a 270° pot is about 67°; of a 10-turn trimmer, 2.5 turns. An option wins over the file.
+    @Test
+    void theDesignsTravelStatesTheTurnWhenNoOptionDoes() {
+        Design deg = PWM.withTravel("VR1", org.rcbench.design.PotTravel.ofDegrees(270));
+        TuneResult r = Tuner.of(deg).tune(pwmAt(0.2574), TuneTarget.of(TimingQuantity.DUTY, 0.5050));
+        assertThat(r.target().travelDegrees()).isEqualTo(270);
+        assertThat(r.advice()).containsPattern("about (6[5-9])° of its 270° travel");
+        Design turns = PWM.withTravel("VR1", org.rcbench.design.PotTravel.ofTurns(10));
+        TuneResult t = Tuner.of(turns).tune(pwmAt(0.2574), TuneTarget.of(TimingQuantity.DUTY, 0.5050));
+        assertThat(t.advice()).containsPattern("about 2\\.[4-6] of its 10 turns");
+        TuneResult option = Tuner.of(turns).tune(pwmAt(0.2574),
+                TuneTarget.of(TimingQuantity.DUTY, 0.5050).withTravelDegrees(300));
+        assertThat(option.advice()).contains("of its 300° travel").doesNotContain("turns)");
+        TuneResult none = Tuner.of(PWM).tune(pwmAt(0.2574), TuneTarget.of(TimingQuantity.DUTY, 0.5050));
+        assertThat(none.advice()).doesNotContain("°").doesNotContain("turns");
+    }
+
     @Test
     void theWiperDoesNotSetThePwmFrequency() {
         TuneResult r = Tuner.of(PWM).tune(pwmAt(0.2574), TuneTarget.of(TimingQuantity.FREQUENCY, 2000));

@@ -51,14 +51,15 @@ class CycleCsvTest {
         try (Capture c = open(CAPTURE)) {
             s = CycleCsv.write(c, 0, sw);
         }
-        // The first edge only sets the level (it may be the initial state of a dump), so the first
-        // whole cycle is 1100 -> 2100; 2100 -> 3000 is cut by the gap; 3000 follows the gap, so its low
-        // phase was not seen; 4000 -> 5000 is whole.
-        assertThat(s).isEqualTo(new CycleCsv.Summary(2, 1, 0));
+        // Rising edges at 100, 1100, 2100, 3000, 4000, 5000 (channel 1 is not this channel's):
+        // 100 -> 1100 and 1100 -> 2100 are whole; 2100 -> 3000 is cut by the gap at 2500, so 3000
+        // starts a new run: 3000 -> 4000 and 4000 -> 5000. Four cycles, none settling.
+        assertThat(s).isEqualTo(new CycleCsv.Summary(4, 0, 0, 1, 0));
         List<CSVRecord> rows = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get()
                 .parse(new StringReader(sw.toString())).getRecords();
         assertThat(rows.get(0).getParser().getHeaderNames()).containsExactly(CycleCsv.HEADER);
-        assertThat(rows).extracting(r -> r.get("start_tick")).containsExactly("1100", "4000");
+        assertThat(rows).extracting(r -> r.get("start_tick")).containsExactly("100", "1100", "3000", "4000");
+        assertThat(rows).extracting(r -> r.get("flags")).containsExactly("new-run", "", "new-run", "");
         for (CSVRecord r : rows) {
             // 1000 ticks of a 1 MHz clock = 1 ms; high 300 ticks = 0.3 ms; duty 0.3 (arithmetic).
             assertThat(Double.parseDouble(r.get("period_s"))).isEqualTo(0.001);
@@ -66,7 +67,7 @@ class CycleCsvTest {
             assertThat(Double.parseDouble(r.get("low_s"))).isEqualTo(0.0007);
             assertThat(Double.parseDouble(r.get("duty"))).isEqualTo(0.3);
         }
-        assertThat(rows).extracting(r -> r.get("cycle")).containsExactly("1", "2");
+        assertThat(rows).extracting(r -> r.get("cycle")).containsExactly("1", "2", "3", "4");
         assertThat(sw.toString()).contains("\r\n").doesNotContain(",\n");
     }
 
@@ -83,16 +84,20 @@ class CycleCsvTest {
     }
 
     @Test
-    void aLostEdgeBreaksTheCycle() {
-        List<long[]> got = new java.util.ArrayList<>();
-        CycleExtractor x = new CycleExtractor(0, (start, high, period) -> got.add(new long[] {start, high, period}));
-        int[][] edges = {{0, 0}, {10, 1}, {13, 0}, {20, 1}, {30, 1}, {33, 0}, {40, 1}, {43, 0}, {50, 1}};
-        for (int[] e : edges) {
-            x.onEdge(e[0], 0, e[1]);
+    void aLostEdgeBreaksTheCycleAndSettlingIsFlagged() throws Exception {
+        // Rising every 10 ticks, high 3, low 7; the first high lasts 6 (settling); a falling edge is
+        // lost between 20 and 30 (high, then high again), so 20 -> 30 is no cycle and 30 starts a new run.
+        String text = "# rcbench edges v1\n# clock_hz=1000\ntick,channel,level\n0,0,1\n6,0,0\n10,0,1\n13,0,0\n20,0,1\n"
+                + "30,0,1\n33,0,0\n40,0,1\n43,0,0\n50,0,1\n53,0,0\n60,0,1\n";
+        StringWriter sw = new StringWriter();
+        CycleCsv.Summary s;
+        try (Capture c = open(text)) {
+            s = CycleCsv.write(c, 0, sw);
         }
-        // 10->20 is whole; 20->30 has no falling edge (a repeated high), so 30 only sets the level;
-        // 40 follows a seen low but 30 was not a known rising edge, so the next whole cycle is 40->50.
-        assertThat(got).containsExactly(new long[] {10, 3, 10}, new long[] {40, 3, 10});
-        assertThat(x.repeatedLevels()).isEqualTo(1);
+        List<CSVRecord> rows = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get()
+                .parse(new StringReader(sw.toString())).getRecords();
+        assertThat(rows).extracting(r -> r.get("start_tick") + " " + r.get("high_s") + " " + r.get("flags"))
+                .containsExactly("0 0.006 settling new-run", "10 0.003 ", "30 0.003 new-run", "40 0.003 ", "50 0.003 ");
+        assertThat(s).isEqualTo(new CycleCsv.Summary(5, 1, 0, 0, 1));
     }
 }

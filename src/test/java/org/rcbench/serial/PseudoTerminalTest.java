@@ -6,7 +6,6 @@ import java.io.FileInputStream;
 import java.io.FileOutputStream;
 import java.io.IOException;
 import java.io.InputStream;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
@@ -23,37 +22,27 @@ import org.rcbench.probe.SessionConfig;
 import org.rcbench.probe.SessionState;
 import org.rcbench.protocol.ProbeEvents;
 import org.rcbench.protocol.Trouble;
-import org.rcbench.testing.ExternalTool;
 import org.rcbench.testing.ProbeEmulator;
+import org.rcbench.testing.PtyPair;
 
 /**
  * End to end through a real pseudo-terminal pair made by socat: a probe emulator writes protocol
  * bytes on one end, a {@link ProbeSession} reads the other through jSerialComm.
  */
 class PseudoTerminalTest {
-    Process socat;
+    PtyPair pair;
 
     @AfterEach
     void stopSocat() {
-        if (socat != null) {
-            socat.destroyForcibly();
+        if (pair != null) {
+            pair.close();
         }
     }
 
-    /** Starts socat and waits until both links exist. */
+    /** Starts socat and waits until both ends exist. */
     Path[] ptyPair(Path dir) throws Exception {
-        Path tool = ExternalTool.require("socat", "socat");
-        Path a = dir.resolve("a");
-        Path b = dir.resolve("b");
-        socat = new ProcessBuilder(tool.toString(), "-d", "-d", "pty,raw,echo=0,link=" + a,
-                "pty,raw,echo=0,link=" + b).redirectErrorStream(true).redirectOutput(dir.resolve("socat.log").toFile())
-                .start();
-        long deadline = System.nanoTime() + 10_000_000_000L;
-        while (!(Files.exists(a) && Files.exists(b))) {
-            assertThat(System.nanoTime()).as("socat made its ptys").isLessThan(deadline);
-            Thread.sleep(20);
-        }
-        return new Path[] {a, b};
+        pair = PtyPair.start(dir);
+        return new Path[] {pair.a(), pair.b()};
     }
 
     static final class Sink implements EdgeSink {
@@ -129,7 +118,7 @@ class PseudoTerminalTest {
             }
             assertThat(sink.calls).isEqualTo(truth);
 
-            socat.destroyForcibly().waitFor();
+            pair.unplug();
             deadline = System.nanoTime() + 15_000_000_000L;
             while (!session.state().isFinal() && System.nanoTime() < deadline) {
                 Thread.sleep(20);

@@ -22,7 +22,7 @@ import org.rcbench.design.Design;
 import org.rcbench.probe.ByteTransport;
 import org.rcbench.source.DemoDesigns;
 import org.rcbench.testing.CliRun;
-import org.rcbench.testing.ExternalTool;
+import org.rcbench.testing.PtyPair;
 import org.rcbench.testing.RecordingSink;
 
 /**
@@ -31,28 +31,19 @@ import org.rcbench.testing.RecordingSink;
  * through jSerialComm, then {@code rcbench measure} reads the file. Killing socat pulls the cable.
  */
 class PtyEndToEndTest {
-    Process socat;
+    PtyPair pair;
 
     @AfterEach
     void stopSocat() {
-        if (socat != null) {
-            socat.destroyForcibly();
+        if (pair != null) {
+            pair.close();
         }
     }
 
+    /** Starts socat and waits until both ends exist. */
     Path[] ptyPair(Path dir) throws Exception {
-        Path tool = ExternalTool.require("socat", "socat");
-        Path a = dir.resolve("a");
-        Path b = dir.resolve("b");
-        socat = new ProcessBuilder(tool.toString(), "-d", "-d", "pty,raw,echo=0,link=" + a,
-                "pty,raw,echo=0,link=" + b).redirectErrorStream(true).redirectOutput(dir.resolve("socat.log").toFile())
-                .start();
-        long deadline = System.nanoTime() + 10_000_000_000L;
-        while (!(Files.exists(a) && Files.exists(b))) {
-            assertThat(System.nanoTime()).as("socat made its ptys").isLessThan(deadline);
-            Thread.sleep(20);
-        }
-        return new Path[] {a, b};
+        pair = PtyPair.start(dir);
+        return new Path[] {pair.a(), pair.b()};
     }
 
     /** Copies bytes both ways between the simulated probe's port and a pty end until either side ends. */
@@ -115,7 +106,7 @@ class PtyEndToEndTest {
                     Thread.sleep(50);
                 }
                 edgesAtKill.set(edgesIn(file));
-                socat.destroyForcibly().waitFor();
+                pair.unplug();
             } catch (InterruptedException e) {
                 Thread.currentThread().interrupt();
             }

@@ -5,8 +5,8 @@ import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import org.rcbench.capture.EdgeCaptureFormat;
 import org.rcbench.capture.EdgeCaptureWriter;
+import org.rcbench.capture.EdgeWriter;
 import org.rcbench.design.Design;
-import org.rcbench.edge.EdgeSink;
 import org.rcbench.sim.SimulationSpec;
 import org.rcbench.sim.VirtualBoard;
 
@@ -20,25 +20,9 @@ public final class SimCaptures {
         VirtualBoard board = VirtualBoard.of(design, spec);
         try (EdgeCaptureWriter w = EdgeCaptureWriter.create(file,
                 EdgeCaptureFormat.header(board.timebase(), board.channelNames()), false)) {
-            board.runFor(seconds, new EdgeSink() {
-                @Override
-                public void onEdge(long tick, int channel, int level) {
-                    try {
-                        w.append(tick, channel, level);
-                    } catch (IOException e) {
-                        throw new UncheckedIOException(e);
-                    }
-                }
-
-                @Override
-                public void onEnd(long lastTick) {
-                    try {
-                        w.end(lastTick);
-                    } catch (IOException e) {
-                        throw new UncheckedIOException(e);
-                    }
-                }
-            });
+            board.runFor(seconds, EdgeWriter.sink(w, ch -> true));
+        } catch (UncheckedIOException e) {
+            throw e.getCause();
         }
         return board;
     }

@@ -3,18 +3,31 @@ package org.rcbench.cli;
 import org.rcbench.common.BadInputException;
 import org.rcbench.history.HistoryStore;
 import org.rcbench.history.RunRecord;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
 
-/** Picks the run a command names: a run number or {@code --last}. Stateless. */
-final class Runs {
-    private Runs() {
+/**
+ * The stored run a command is about: a run number ({@code RUN}) or {@code --last}. A picocli mixin:
+ * {@code @Mixin RunChoice runs;}, then {@link #pick}.
+ */
+final class RunChoice {
+    @Parameters(index = "0", arity = "0..1", paramLabel = "RUN", description = "Run number (see rcbench history).")
+    Long run;
+
+    @Option(names = "--last", description = "The run saved last.")
+    boolean last;
+
+    /** Whether a run number or {@code --last} was given. */
+    boolean given() {
+        return run != null || last;
     }
 
     /**
-     * The run numbered {@code run}, or the last saved when {@code last}.
+     * The run numbered {@code RUN}, or the last saved with {@code --last}.
      *
      * @throws BadInputException when neither or both are given, or there is no such run
      */
-    static RunRecord pick(HistoryStore store, Long run, boolean last) {
+    RunRecord pick(HistoryStore store) {
         if ((run == null) == !last) {
             throw new BadInputException("", "give either a run number or --last");
         }
