@@ -52,7 +52,7 @@ public final class GuiCommand implements Callable<Integer> {
             description = "Render the window headless after --after of data, write it to PNG and exit.")
     Path snapshot;
 
-    @Option(names = "--after", paramLabel = "TIME", defaultValue = "4s", converter = SecondsConverter.class,
+    @Option(names = "--after", paramLabel = "TIME", defaultValue = "4s", converter = ValueConverters.TimeOrZero.class,
             description = "With --snapshot: seconds of data before the picture (default: ${DEFAULT-VALUE}).")
     double afterSeconds;
 
@@ -70,7 +70,7 @@ public final class GuiCommand implements Callable<Integer> {
         }
         SourceChoice choice = choice(source.sourceSpec());
         Path folder = Path.of("").toAbsolutePath();
-        BenchServices services = GuiServices.standard(SourceOptions.calibrations(database), database.path());
+        BenchServices services = GuiServices.standard(database.calibrations(), database.path());
         if (snapshot != null) {
             int[] wh = parseSize(size);
             if (!(afterSeconds >= 0) || afterSeconds > 600) {
