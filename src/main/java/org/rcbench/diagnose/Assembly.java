@@ -76,7 +76,7 @@ final class Assembly {
             best = Math.min(best, f.misfit());
         }
         boolean fitsWell = best <= POOR_FIT_CHI2[Math.min(target.size(), POOR_FIT_CHI2.length - 1)];
-        String summary = summary(fits.get(0), w[0], suspects, ambiguities, fitsWell, best, target.size());
+        String summary = summary(dm, fits.get(0), w[0], suspects, ambiguities, fitsWell, best, target.size());
         return new Diagnosis(o, explanations, suspects, estimates, ambiguities, noFault, fitsWell, summary);
     }
 
@@ -135,8 +135,8 @@ final class Assembly {
         return out;
     }
 
-    private static String summary(Fit lead, double p, List<Suspect> suspects, List<Ambiguity> ambiguities,
-            boolean fitsWell, double misfit, int quantities) {
+    private static String summary(DiagnosisModel dm, Fit lead, double p, List<Suspect> suspects,
+            List<Ambiguity> ambiguities, boolean fitsWell, double misfit, int quantities) {
         StringBuilder sb = new StringBuilder();
         if (!fitsWell) {
             sb.append(String.format(Locale.ROOT, "No explanation tested fits the measurement well (misfit %.1f for %d"
@@ -148,8 +148,14 @@ final class Assembly {
             split |= a.between().size() > 1 && !a.between().get(1).equals("no fault");
         }
         if (lead.hypothesis().faults().isEmpty()) {
-            sb.append(String.format(Locale.ROOT, "No part needs to be outside its band to explain the measurement"
-                    + " (probability %.2f).", p));
+            String worn = beyondTolerance(dm, lead);
+            if (worn.isEmpty()) {
+                sb.append(String.format(Locale.ROOT, "No part needs to be outside its band to explain the measurement"
+                        + " (probability %.2f).", p));
+            } else {
+                sb.append(String.format(Locale.ROOT, "No part needs to be faulty to explain the measurement"
+                        + " (probability %.2f), but that explanation puts %s.", p, worn));
+            }
             if (split) {
                 sb.append(" If a part is off, the measurement cannot tell which: ")
                         .append(Identifiability.alternatives(ambiguities.get(0).between())).append('.');
@@ -177,6 +183,35 @@ final class Assembly {
             sb.append(" The measurement is also consistent with every part inside its band.");
         }
         return sb.toString();
+    }
+
+    /**
+     * For a no-fault lead: the parts it places beyond their stated tolerance (but within the drift
+     * their kind allows: ageing, bias, temperature), so the line never reads as "all parts in
+     * tolerance" while the board fails its worst case. Empty when every part is inside its tolerance;
+     * otherwise a clause such as {@code C1 at 7 µF (-30.0 %, 1.5× its tolerance) beyond the stated tolerance, ...}.
+     */
+    static String beyondTolerance(DiagnosisModel dm, Fit lead) {
+        List<String> out = new ArrayList<>();
+        for (int i = 0; i < lead.coords().size(); i++) {
+            Coordinate c = lead.coords().get(i);
+            if (dm.design.part(c.name()) == null) {
+                continue;
+            }
+            double nominal = dm.base[c.index()];
+            double dev = c.value(lead.z()[i]) / nominal - 1;
+            Tolerance t = dm.tolerance(c.name());
+            double side = dev < 0 ? t.minusFraction() : t.plusFraction();
+            if (side > 0 && Math.abs(dev) > side) {
+                out.add(c.name() + " at " + ValueCode.formatSi(c.value(lead.z()[i]), dm.table.unit(c.index()), 3)
+                        + String.format(Locale.ROOT, " (%+.1f %%, %.1f× its tolerance)", dev * 100, Math.abs(dev) / side));
+            }
+        }
+        if (out.isEmpty()) {
+            return "";
+        }
+        return String.join(" and ", out) + " beyond the stated tolerance, within the drift its kind can show with"
+                + " age, bias or temperature";
     }
 
     /** A suspect in words: {@code C1 at 68.7 nF (-31.3 %, 6.3× its tolerance)}. */

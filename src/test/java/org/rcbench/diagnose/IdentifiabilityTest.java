@@ -41,6 +41,29 @@ class IdentifiabilityTest {
     }
 
     @Test
+    void noFaultLeadStillNamesAPartBeyondItsStatedTolerance() {
+        // Pulse width 0.69 R C ln 3 (RC law; check-values.md) with a 20 % aluminium electrolytic: the
+        // electrolytic's ageing allowance lets "no fault" lead, but the summary must say that this puts a
+        // part beyond its stated tolerance instead of reading as "everything in tolerance".
+        Design m = Boards.idealMonostable("1%", "metal-film", "20%", "aluminium-electrolytic");
+        Diagnosis d = Diagnoser.of(m).diagnose(Boards.given(1e-4, TimingQuantity.PULSE_WIDTH, 0.69 * WIDTH));
+        if (d.best().isNoFault()) {
+            assertThat(d.summary()).contains("beyond the stated tolerance").containsPattern("C1 at [0-9.]+ [nµ]F \\(-");
+        } else {
+            assertThat(d.summary()).doesNotContain("No part needs to be outside its band");
+        }
+    }
+
+    @Test
+    void noFaultLeadInsideTheTolerancesAddsNothing() {
+        // 0.97 R C ln 3 lies inside 1 % / 20 % tolerances: no part is placed beyond its stated tolerance.
+        Design m = Boards.idealMonostable("1%", "metal-film", "20%", "aluminium-electrolytic");
+        Diagnosis d = Diagnoser.of(m).diagnose(Boards.given(1e-4, TimingQuantity.PULSE_WIDTH, 0.97 * WIDTH));
+        assertThat(d.best().isNoFault()).isTrue();
+        assertThat(d.summary()).doesNotContain("beyond the stated tolerance");
+    }
+
+    @Test
     void astableCapacitorAgainstSharedResistorIsSeparatedByTheDuty() {
         // R2 = 7k: high (1k + 7k) C ln 2, low 7k C ln 2 (RC law): the duty moves, so C1 cannot explain it.
         Design a = Boards.idealAstable("5%", "carbon-film", "10n", "5%", "film");
