@@ -192,6 +192,9 @@ class BenchWindowTest {
         robot.clickOn("#pick-find");
         waitUntil(() -> !model.picker().options().isEmpty(), 30);
         var first = model.picker().options().get(0);
+        // The list's cells are laid out on a later pulse than the model's options arrive.
+        waitUntil(() -> robot.lookup("#pick-options .list-cell").tryQuery()
+                .map(n -> ((javafx.scene.control.ListCell<?>) n).getItem() != null).orElse(false), 10);
         robot.clickOn(robot.lookup("#pick-options .list-cell").nth(0).queryAs(javafx.scene.Node.class));
         robot.clickOn("#pick-use");
         waitUntil(() -> model.design().titleProperty().get().contains("(edited)"), 5);
