@@ -44,6 +44,8 @@ final class HtmlText {
             case "1", "" -> number(v, 6, false);
             case "count" -> String.format(Locale.ROOT, "%d", Math.round(v));
             case "ppm", "ppm/s" -> String.format(Locale.ROOT, "%.4g %s", v, unit);
+            // The check JSON spells the ohm out ("ohm") to stay ASCII; people read the symbol.
+            case "ohm" -> SiFormat.format(v, "Ω", 4);
             default -> SiFormat.format(v, unit, 4);
         };
     }
